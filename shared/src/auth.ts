@@ -1,0 +1,46 @@
+/** Roles, in the order the product's design lists them. New accounts are racers. */
+export const ROLES = ['racer', 'coach', 'shop', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const PASSWORD_MIN_LENGTH = 10;
+export const PASSWORD_MAX_LENGTH = 200;
+export const DISPLAY_NAME_MAX_LENGTH = 80;
+
+export interface UserDto {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  createdAt: string;
+}
+
+/** POST /api/auth/sign-up (201, sets the session cookie). */
+export interface SignUpRequest {
+  email: string;
+  password: string;
+  displayName: string;
+}
+
+/** POST /api/auth/sign-in (200, sets the session cookie). */
+export interface SignInRequest {
+  email: string;
+  password: string;
+}
+
+/** Body of sign-up, sign-in and GET /api/auth/me. */
+export interface SessionResponse {
+  user: UserDto;
+}
+
+/** GET /api/users (admin). */
+export interface UserListResponse {
+  users: UserDto[];
+}
+
+/** PATCH /api/users/:id/role (admin). */
+export interface ChangeRoleRequest {
+  role: Role;
+}
+
+/** The one message for a wrong password and for an unknown e-mail (no account enumeration). */
+export const SIGN_IN_FAILED_MESSAGE = 'E-mail or password is wrong.';

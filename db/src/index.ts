@@ -1,1 +1,3 @@
-export {};
+export * from './client.js';
+export * from './schema/index.js';
+export * from './seed.js';

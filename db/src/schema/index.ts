@@ -1,0 +1,3 @@
+export * from './users.js';
+export * from './sessions.js';
+export * from './karts.js';

@@ -1,0 +1,56 @@
+import { readFileSync } from 'node:fs';
+import { sql } from 'drizzle-orm';
+import type { Role } from '@fuelwright/shared';
+import type { Db } from './client.js';
+import { karts, users } from './schema/index.js';
+
+export const DEMO_FIXTURE_PATH = new URL('../../fixtures/demo-club.json', import.meta.url);
+
+export interface DemoFixture {
+  club: { name: string };
+  password: string;
+  users: { email: string; displayName: string; role: Role }[];
+  karts: {
+    owner: string;
+    name: string;
+    displacementCc: number;
+    drive: 'gearbox' | 'direct-drive';
+    carburettorKind: 'pump-around' | 'float-valve';
+    notes: string;
+  }[];
+}
+
+export function readDemoFixture(): DemoFixture {
+  return JSON.parse(readFileSync(DEMO_FIXTURE_PATH, 'utf8')) as DemoFixture;
+}
+
+/**
+ * Loads the invented demo club when the database has no users yet; otherwise does nothing.
+ * Returns whether it seeded. One transaction: a half-seeded database is never left behind.
+ */
+export async function seedDemoIfEmpty(
+  db: Db,
+  hashPassword: (plain: string) => Promise<string>,
+  fixture: DemoFixture = readDemoFixture(),
+): Promise<boolean> {
+  const [{ count }] = await db.select({ count: sql<number>`count(*)::int` }).from(users);
+  if (count > 0) return false;
+  const passwordHash = await hashPassword(fixture.password);
+  await db.transaction(async (tx) => {
+    const inserted = await tx
+      .insert(users)
+      .values(fixture.users.map((u) => ({ email: u.email, displayName: u.displayName, role: u.role, passwordHash })))
+      .returning({ id: users.id, email: users.email });
+    const idByEmail = new Map(inserted.map((u) => [u.email, u.id]));
+    if (fixture.karts.length > 0) {
+      await tx.insert(karts).values(
+        fixture.karts.map((k) => {
+          const ownerId = idByEmail.get(k.owner);
+          if (!ownerId) throw new Error(`demo fixture: kart "${k.name}" names unknown owner ${k.owner}`);
+          return { ownerId, name: k.name, displacementCc: k.displacementCc, drive: k.drive, carburettorKind: k.carburettorKind, notes: k.notes };
+        }),
+      );
+    }
+  });
+  return true;
+}

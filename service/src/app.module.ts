@@ -1,0 +1,47 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ConfigModule, registerAs } from '@nestjs/config';
+import { CqrsModule } from '@nestjs/cqrs';
+import { ThrottlerModule } from '@nestjs/throttler';
+import type { DatabaseHandle } from '@fuelwright/db';
+import { loadAppConfig, type AppConfig } from './config/app.config.js';
+import { DatabaseModule } from './database/database.module.js';
+import { AuthModule } from './auth/auth.module.js';
+import { UsersModule } from './users/users.module.js';
+import { HealthController } from './health/health.controller.js';
+import { SessionGuard } from './common/guards/session.guard.js';
+import { RolesGuard } from './common/guards/roles.guard.js';
+import { ApiExceptionFilter } from './common/filters/http-exception.filter.js';
+
+export interface AppModuleOptions {
+  /** Values that replace what the environment says (tests). */
+  config?: Partial<AppConfig>;
+  /** An opened, migrated database to use instead of the configured one (tests). */
+  database?: DatabaseHandle;
+}
+
+@Module({})
+export class AppModule {
+  static forRoot(options: AppModuleOptions = {}): DynamicModule {
+    const config = { ...loadAppConfig(process.env), ...options.config };
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [registerAs('app', () => config)] }),
+        CqrsModule.forRoot(),
+        // Limits apply only where a route opts in with @UseGuards(ThrottlerGuard): sign-in, sign-up,
+        // and later the open rank route (the in-memory store slows down when every route uses it).
+        ThrottlerModule.forRoot([{ name: 'default', ttl: config.throttleTtlMs, limit: config.throttleLimit }]),
+        DatabaseModule.forRoot({ handle: options.database }),
+        AuthModule,
+        UsersModule,
+      ],
+      controllers: [HealthController],
+      providers: [
+        { provide: APP_GUARD, useClass: SessionGuard },
+        { provide: APP_GUARD, useClass: RolesGuard },
+        { provide: APP_FILTER, useClass: ApiExceptionFilter },
+      ],
+    };
+  }
+}

@@ -1,0 +1,12 @@
+import { Command } from '@nestjs/cqrs';
+import type { UserDto } from '@fuelwright/shared';
+
+export class SignUpCommand extends Command<{ user: UserDto; token: string; expiresAt: Date }> {
+  constructor(
+    public readonly email: string,
+    public readonly password: string,
+    public readonly displayName: string,
+  ) {
+    super();
+  }
+}

@@ -8,6 +8,8 @@ import { loadAppConfig, type AppConfig } from './config/app.config.js';
 import { DatabaseModule } from './database/database.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { UsersModule } from './users/users.module.js';
+import { KartsModule } from './karts/karts.module.js';
+import { AccessModule } from './common/access/access.module.js';
 import { HealthController } from './health/health.controller.js';
 import { SessionGuard } from './common/guards/session.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -33,8 +35,10 @@ export class AppModule {
         // and later the open rank route (the in-memory store slows down when every route uses it).
         ThrottlerModule.forRoot([{ name: 'default', ttl: config.throttleTtlMs, limit: config.throttleLimit }]),
         DatabaseModule.forRoot({ handle: options.database }),
+        AccessModule,
         AuthModule,
         UsersModule,
+        KartsModule,
       ],
       controllers: [HealthController],
       providers: [

@@ -1,9 +1,12 @@
 import 'reflect-metadata';
+import { existsSync } from 'node:fs';
 import { Logger } from '@nestjs/common';
 import { createApp } from './app.factory.js';
 import { ConfigError, loadAppConfig } from './config/app.config.js';
 
 async function main(): Promise<void> {
+  // A .env file in the working folder fills in what the environment does not set (see .env.example).
+  if (existsSync('.env')) process.loadEnvFile('.env');
   let config;
   try {
     config = loadAppConfig(process.env);

@@ -1,2 +1,3 @@
 export * from './auth.js';
 export * from './errors.js';
+export * from './karts.js';

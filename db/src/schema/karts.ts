@@ -1,8 +1,9 @@
 import { index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { CARBURETTOR_KINDS, DRIVES } from '@fuelwright/shared';
 import { users } from './users.js';
 
-export const driveEnum = pgEnum('drive', ['gearbox', 'direct-drive']);
-export const carburettorKindEnum = pgEnum('carburettor_kind', ['pump-around', 'float-valve']);
+export const driveEnum = pgEnum('drive', DRIVES);
+export const carburettorKindEnum = pgEnum('carburettor_kind', CARBURETTOR_KINDS);
 
 export const karts = pgTable(
   'karts',

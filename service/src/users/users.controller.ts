@@ -1,4 +1,5 @@
-import { Body, Controller, Get, NotFoundException, Param, ParseUUIDPipe, Patch } from '@nestjs/common';
+import { Body, Controller, Get, Patch } from '@nestjs/common';
+import { UuidParam } from '../common/uuid-param.js';
 import { CommandBus, QueryBus } from '@nestjs/cqrs';
 import { ApiTags } from '@nestjs/swagger';
 import type { UserDto, UserListResponse } from '@fuelwright/shared';
@@ -26,7 +27,7 @@ export class UsersController {
   @Patch(':id/role')
   async changeRole(
     @CurrentUser() actor: SessionUser,
-    @Param('id', new ParseUUIDPipe({ exceptionFactory: () => new NotFoundException('No such user.') })) id: string,
+    @UuidParam('id', 'user') id: string,
     @Body() dto: ChangeRoleDto,
   ): Promise<{ user: UserDto }> {
     return { user: await this.commands.execute(new ChangeRoleCommand(actor.id, id, dto.role)) };

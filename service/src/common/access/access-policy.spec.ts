@@ -1,0 +1,39 @@
+import { describe, expect, it } from 'vitest';
+import { NotFoundException } from '@nestjs/common';
+import { ROLES } from '@fuelwright/shared';
+import { ACTIONS, AccessPolicy, isAllowed, relationOf, type Action } from './access-policy.js';
+
+const OWNER = 'owner-id';
+const FRIEND = 'friend-id';
+const STRANGER = 'stranger-id';
+const resource = { ownerId: OWNER, sharedWith: [FRIEND] };
+const readOnly: Action[] = ['view', 'comment', 'recommend-check', 'log-outcome'];
+
+/** role x relation x action: the whole matrix, every cell asserted. */
+describe('access policy matrix', () => {
+  for (const role of ROLES) {
+    for (const action of ACTIONS) {
+      it(`${role} as owner may ${action}`, () => {
+        expect(isAllowed({ id: OWNER, role }, resource, action)).toBe(true);
+      });
+      const sharedExpected = (role === 'coach' || role === 'shop') && readOnly.includes(action);
+      it(`${role} shared-with ${sharedExpected ? 'may' : 'may not'} ${action}`, () => {
+        expect(isAllowed({ id: FRIEND, role }, resource, action)).toBe(sharedExpected);
+      });
+      it(`${role} with no relation may not ${action}`, () => {
+        expect(isAllowed({ id: STRANGER, role }, resource, action)).toBe(false);
+      });
+    }
+  }
+
+  it('a share given to a racer grants nothing (shares are for coaches and shops)', () => {
+    expect(relationOf({ id: FRIEND, role: 'racer' }, resource)).toBe('other');
+  });
+
+  it('answers 404, not 403, when access is refused or the item does not exist', () => {
+    const policy = new AccessPolicy();
+    expect(() => policy.require({ id: STRANGER, role: 'admin' }, resource, 'view', 'kart')).toThrow(NotFoundException);
+    expect(() => policy.require({ id: OWNER, role: 'racer' }, undefined, 'view', 'kart')).toThrow('No such kart.');
+    expect(policy.require({ id: OWNER, role: 'racer' }, resource, 'edit')).toBe(resource);
+  });
+});

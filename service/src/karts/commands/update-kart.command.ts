@@ -1,0 +1,13 @@
+import { Command } from '@nestjs/cqrs';
+import type { KartDto, KartInput } from '@fuelwright/shared';
+import type { SessionUser } from '../../common/session-user.js';
+
+export class UpdateKartCommand extends Command<KartDto> {
+  constructor(
+    public readonly user: SessionUser,
+    public readonly kartId: string,
+    public readonly changes: Partial<KartInput>,
+  ) {
+    super();
+  }
+}

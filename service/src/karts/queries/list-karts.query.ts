@@ -1,0 +1,9 @@
+import { Query } from '@nestjs/cqrs';
+import type { KartDto } from '@fuelwright/shared';
+import type { SessionUser } from '../../common/session-user.js';
+
+export class ListKartsQuery extends Query<KartDto[]> {
+  constructor(public readonly user: SessionUser) {
+    super();
+  }
+}

@@ -1,0 +1,49 @@
+/**
+ * Every route path of the UI, in one place. Pages and links import from here, never spell a path.
+ * (A leaf module without imports, so features may import it without pulling in the app.)
+ */
+export const paths = {
+  landing: '/',
+  quickDiagnosis: '/diagnose',
+  signIn: '/sign-in',
+  signUp: '/sign-up',
+  home: '/home',
+  // racer
+  karts: '/karts',
+  cases: '/cases',
+  // coach
+  sharedCases: '/shared-cases',
+  // shop
+  workOrders: '/work-orders',
+  outcomes: '/outcomes',
+  // admin
+  users: '/admin/users',
+  rulesets: '/admin/rulesets',
+} as const;
+
+export type AppPath = (typeof paths)[keyof typeof paths];
+
+/** The query parameter that carries the page to return to after signing in. */
+export const NEXT_PARAM = 'next';
+
+/** Only same-site paths are accepted as a return target (no `//host`, no `https:`, no backslashes). */
+export function safeNextPath(raw: string | null | undefined): string | null {
+  if (!raw || !raw.startsWith('/') || raw.startsWith('//') || raw.includes('\\')) return null;
+  const pathname = raw.split(/[?#]/)[0];
+  if (pathname === paths.signIn || pathname === paths.signUp) return null;
+  return raw;
+}
+
+/** The sign-in page, remembering where to come back to. */
+export function signInPath(next?: string | null): string {
+  const target = safeNextPath(next);
+  return target && target !== paths.landing
+    ? `${paths.signIn}?${NEXT_PARAM}=${encodeURIComponent(target)}`
+    : paths.signIn;
+}
+
+/** The sign-up page, keeping the return target when there is one. */
+export function signUpPath(next?: string | null): string {
+  const target = safeNextPath(next);
+  return target ? `${paths.signUp}?${NEXT_PARAM}=${encodeURIComponent(target)}` : paths.signUp;
+}

@@ -1,0 +1,142 @@
+import type { ComponentType } from 'react';
+import {
+  BookIcon,
+  ClipboardIcon,
+  DiagnosisIcon,
+  DriveTimeIcon,
+  EndorsedIcon,
+  FolderOpenIcon,
+  FolderSharedIcon,
+  HomeIcon,
+  PeopleIcon,
+  type SVGIconProps,
+} from '@blueprintjs/icons';
+import type { Access } from './access';
+import { paths } from './paths';
+
+export type IconComponent = ComponentType<SVGIconProps>;
+
+export interface MenuEntry {
+  /** Text in the navbar and the drawer; defaults to the route's title. */
+  label?: string;
+  icon: IconComponent;
+  /** Position in the menu, lowest first. */
+  order: number;
+}
+
+/** Data a page can read through `useMatches()` (title, and what a placeholder page says). */
+export interface RouteHandle {
+  title: string;
+  /** For screens that later issues fill: one honest sentence on what will be here. */
+  comingNext?: string;
+}
+
+export interface AppRoute extends RouteHandle {
+  path: string;
+  access: Access;
+  /** Loads the page lazily: each route is its own chunk. */
+  page: () => Promise<ComponentType>;
+  /** Present when the route has a menu entry; the entry shows only to those who may open it. */
+  menu?: MenuEntry;
+}
+
+const comingNextPage = () => import('./pages/coming-next-page').then((m) => m.ComingNextPage);
+
+/**
+ * Every screen of the app. The router, the route guards and the navigation menu are all built
+ * from this table: a new feature adds its path to paths.ts and one entry here.
+ */
+export const appRoutes: readonly AppRoute[] = [
+  {
+    path: paths.landing,
+    title: 'Welcome',
+    access: 'visitors',
+    page: () => import('../features/home/components/landing-page').then((m) => m.LandingPage),
+  },
+  {
+    path: paths.signIn,
+    title: 'Sign in',
+    access: 'visitors',
+    page: () => import('../features/auth/components/sign-in-page').then((m) => m.SignInPage),
+  },
+  {
+    path: paths.signUp,
+    title: 'Create account',
+    access: 'visitors',
+    page: () => import('../features/auth/components/sign-up-page').then((m) => m.SignUpPage),
+  },
+  {
+    path: paths.home,
+    title: 'Home',
+    access: 'signed-in',
+    page: () => import('../features/home/components/home-page').then((m) => m.HomePage),
+    menu: { icon: HomeIcon, order: 0 },
+  },
+  {
+    path: paths.karts,
+    title: 'Karts',
+    access: ['racer'],
+    page: comingNextPage,
+    comingNext:
+      'Your karts with their engine and carburettor, and a dated setup for each: jets, needle clip, air screw, foam and rebuild dates.',
+    menu: { icon: DriveTimeIcon, order: 10 },
+  },
+  {
+    path: paths.cases,
+    title: 'Cases',
+    access: ['racer'],
+    page: comingNextPage,
+    comingNext:
+      'Running problems you are working through, each with its likely causes, its check plan and the result of every check.',
+    menu: { icon: FolderOpenIcon, order: 20 },
+  },
+  {
+    path: paths.sharedCases,
+    title: 'Shared cases',
+    access: ['coach'],
+    page: comingNextPage,
+    comingNext:
+      'Cases your racers share with you: review them, comment, ask for a photo and recommend the next check.',
+    menu: { icon: FolderSharedIcon, order: 20 },
+  },
+  {
+    path: paths.workOrders,
+    title: 'Work orders',
+    access: ['shop'],
+    page: comingNextPage,
+    comingNext: "Customers' karts in for work, with the case that brought each one in.",
+    menu: { icon: ClipboardIcon, order: 20 },
+  },
+  {
+    path: paths.outcomes,
+    title: 'Outcomes',
+    access: ['shop', 'admin'],
+    page: comingNextPage,
+    comingNext:
+      'What was really wrong and what fixed it: the cause, the fix, labour minutes, parts, and whether it stayed fixed.',
+    menu: { icon: EndorsedIcon, order: 30 },
+  },
+  {
+    path: paths.users,
+    title: 'Users',
+    access: ['admin'],
+    page: () => import('../features/admin-users/components/users-page').then((m) => m.UsersPage),
+    menu: { icon: PeopleIcon, order: 20 },
+  },
+  {
+    path: paths.rulesets,
+    title: 'Rulesets',
+    access: ['admin'],
+    page: comingNextPage,
+    comingNext:
+      'Versions of the knowledge base (symptoms, causes, checks, cautions and rule weights): publish a new one or roll back.',
+    menu: { icon: BookIcon, order: 40 },
+  },
+  {
+    path: paths.quickDiagnosis,
+    title: 'Quick diagnosis',
+    access: 'anyone',
+    page: () => import('../features/home/components/quick-diagnosis-page').then((m) => m.QuickDiagnosisPage),
+    menu: { icon: DiagnosisIcon, order: 90 },
+  },
+];

@@ -1,0 +1,85 @@
+import {
+  BookIcon,
+  ClipboardIcon,
+  DiagnosisIcon,
+  DriveTimeIcon,
+  EndorsedIcon,
+  FolderOpenIcon,
+  FolderSharedIcon,
+  PeopleIcon,
+} from '@blueprintjs/icons';
+import { paths } from '../../../app/paths';
+import { HomeCard, HomeGrid } from './home-card';
+
+function QuickDiagnosisCard({ primary = false }: { primary?: boolean }) {
+  return (
+    <HomeCard
+      icon={DiagnosisIcon}
+      title="Quick diagnosis"
+      to={paths.quickDiagnosis}
+      action="Start a quick diagnosis"
+      comingNext
+      primary={primary}
+    >
+      Say what the engine does and where, and get the likely causes with a check plan, quickest checks first.
+    </HomeCard>
+  );
+}
+
+export function RacerHome() {
+  return (
+    <HomeGrid>
+      <QuickDiagnosisCard primary />
+      <HomeCard icon={DriveTimeIcon} title="My karts" to={paths.karts} action="Open karts" comingNext>
+        No karts yet. Adding karts with their engine, carburettor and dated setups comes next.
+      </HomeCard>
+      <HomeCard icon={FolderOpenIcon} title="Open cases" to={paths.cases} action="Open cases" comingNext>
+        No open cases. A case keeps one running problem with its checks and what fixed it; cases come with the
+        guided diagnosis.
+      </HomeCard>
+    </HomeGrid>
+  );
+}
+
+export function CoachHome() {
+  return (
+    <HomeGrid>
+      <HomeCard icon={FolderSharedIcon} title="Shared cases" to={paths.sharedCases} action="Open shared cases" comingNext primary>
+        Nothing shared with you yet. When your racers share a case you can review it, comment, ask for a photo and
+        recommend the next check.
+      </HomeCard>
+      <QuickDiagnosisCard />
+    </HomeGrid>
+  );
+}
+
+export function ShopHome() {
+  return (
+    <HomeGrid>
+      <HomeCard icon={ClipboardIcon} title="Work orders" to={paths.workOrders} action="Open work orders" comingNext primary>
+        No work orders yet. Customers&apos; karts in for work will be listed here with the case that brought them in.
+      </HomeCard>
+      <HomeCard icon={EndorsedIcon} title="Outcomes" to={paths.outcomes} action="Open outcomes" comingNext>
+        No outcomes logged yet. Log what was really wrong and what fixed it, so the ranking learns which causes are
+        common.
+      </HomeCard>
+      <QuickDiagnosisCard />
+    </HomeGrid>
+  );
+}
+
+export function AdminHome() {
+  return (
+    <HomeGrid>
+      <HomeCard icon={PeopleIcon} title="Users" to={paths.users} action="Manage users" primary>
+        See every account and set its role: racer, coach, shop or admin.
+      </HomeCard>
+      <HomeCard icon={BookIcon} title="Rulesets" to={paths.rulesets} action="Open rulesets" comingNext>
+        Publish and roll back versions of the knowledge base: symptoms, causes, checks, cautions and rule weights.
+      </HomeCard>
+      <HomeCard icon={EndorsedIcon} title="Outcomes" to={paths.outcomes} action="Open outcomes" comingNext>
+        What shops and racers logged as the real cause and fix, to check how well the rules rank.
+      </HomeCard>
+    </HomeGrid>
+  );
+}

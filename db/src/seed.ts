@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { sql } from 'drizzle-orm';
-import type { Role } from '@fuelwright/shared';
+import type { Role, SetupInput } from '@fuelwright/shared';
 import type { Db } from './client.js';
-import { karts, users } from './schema/index.js';
+import { karts, setups, users } from './schema/index.js';
 
 export const DEMO_FIXTURE_PATH = new URL('../../fixtures/demo-club.json', import.meta.url);
 
@@ -18,6 +18,8 @@ export interface DemoFixture {
     carburettorKind: 'pump-around' | 'float-valve';
     notes: string;
   }[];
+  /** Setup snapshots, by kart name. */
+  setups?: (SetupInput & { kart: string })[];
 }
 
 export function readDemoFixture(): DemoFixture {
@@ -42,12 +44,25 @@ export async function seedDemoIfEmpty(
       .values(fixture.users.map((u) => ({ email: u.email, displayName: u.displayName, role: u.role, passwordHash })))
       .returning({ id: users.id, email: users.email });
     const idByEmail = new Map(inserted.map((u) => [u.email, u.id]));
-    if (fixture.karts.length > 0) {
-      await tx.insert(karts).values(
+    if (fixture.karts.length === 0) return;
+    const kartRows = await tx
+      .insert(karts)
+      .values(
         fixture.karts.map((k) => {
           const ownerId = idByEmail.get(k.owner);
           if (!ownerId) throw new Error(`demo fixture: kart "${k.name}" names unknown owner ${k.owner}`);
           return { ownerId, name: k.name, displacementCc: k.displacementCc, drive: k.drive, carburettorKind: k.carburettorKind, notes: k.notes };
+        }),
+      )
+      .returning({ id: karts.id, name: karts.name, ownerId: karts.ownerId });
+    const kartByName = new Map(kartRows.map((k) => [k.name, k]));
+    const snapshots = fixture.setups ?? [];
+    if (snapshots.length > 0) {
+      await tx.insert(setups).values(
+        snapshots.map(({ kart, note, ...values }) => {
+          const k = kartByName.get(kart);
+          if (!k) throw new Error(`demo fixture: setup names unknown kart "${kart}"`);
+          return { ...values, note: note ?? '', kartId: k.id, createdBy: k.ownerId };
         }),
       );
     }

@@ -1,3 +1,5 @@
+import type { SetupField, SetupSnapshot } from './setup.js';
+
 /** Kart contracts (GET/POST /api/karts, GET/PATCH/DELETE /api/karts/:id). */
 export const DRIVES = ['gearbox', 'direct-drive'] as const;
 export type Drive = (typeof DRIVES)[number];
@@ -44,3 +46,28 @@ export const CARBURETTOR_KIND_LABELS: Record<CarburettorKind, string> = {
   'pump-around': 'Pump-around slide carburettor',
   'float-valve': 'Float-valve slide carburettor',
 };
+
+
+/** The settings of a setup snapshot as stored per kart (the carburettor kind lives on the kart). */
+export type SetupValues = Omit<SetupSnapshot, 'carburettorKind'>;
+
+/** POST /api/karts/:id/setups. `takenOn` is the day the kart ran with it (not in the future). */
+export interface SetupInput extends SetupValues {
+  takenOn: string;
+  note?: string;
+}
+
+/** One snapshot; `changedFields` lists what differs from the snapshot before it (older). */
+export interface SetupDto extends SetupValues {
+  id: string;
+  kartId: string;
+  takenOn: string;
+  note: string;
+  createdAt: string;
+  changedFields: SetupField[];
+}
+
+/** GET /api/karts/:id/setups: newest first. */
+export interface SetupListResponse {
+  setups: SetupDto[];
+}

@@ -1,3 +1,4 @@
 export * from './users.js';
 export * from './sessions.js';
 export * from './karts.js';
+export * from './setups.js';

@@ -1,7 +1,10 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { CommandBus, QueryBus } from '@nestjs/cqrs';
 import { ApiTags } from '@nestjs/swagger';
-import type { KartDto, KartListResponse } from '@fuelwright/shared';
+import type { KartDto, KartListResponse, SetupDto, SetupListResponse } from '@fuelwright/shared';
+import { RecordSetupDto } from './dto/setup.dto.js';
+import { RecordSetupCommand } from './commands/record-setup.command.js';
+import { ListSetupsQuery } from './queries/list-setups.query.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { UuidParam } from '../common/uuid-param.js';
 import type { SessionUser } from '../common/session-user.js';
@@ -44,5 +47,15 @@ export class KartsController {
   @HttpCode(204)
   async remove(@CurrentUser() user: SessionUser, @UuidParam('id', 'kart') id: string): Promise<void> {
     await this.commands.execute(new DeleteKartCommand(user, id));
+  }
+
+  @Get(':id/setups')
+  async setups(@CurrentUser() user: SessionUser, @UuidParam('id', 'kart') id: string): Promise<SetupListResponse> {
+    return { setups: await this.queries.execute(new ListSetupsQuery(user, id)) };
+  }
+
+  @Post(':id/setups')
+  recordSetup(@CurrentUser() user: SessionUser, @UuidParam('id', 'kart') id: string, @Body() dto: RecordSetupDto): Promise<SetupDto> {
+    return this.commands.execute(new RecordSetupCommand(user, id, dto));
   }
 }

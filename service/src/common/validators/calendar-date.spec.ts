@@ -1,0 +1,18 @@
+import { describe, expect, it } from 'vitest';
+import { isCalendarDate, latestAllowedDate } from './calendar-date.js';
+
+describe('calendar dates', () => {
+  it('accepts real dates and refuses impossible ones', () => {
+    expect(isCalendarDate('2026-02-28')).toBe(true);
+    expect(isCalendarDate('2024-02-29')).toBe(true); // leap year (Gregorian rule, from memory)
+    expect(isCalendarDate('2026-02-29')).toBe(false);
+    expect(isCalendarDate('2026-13-01')).toBe(false);
+    expect(isCalendarDate('2026-1-01')).toBe(false);
+    expect(isCalendarDate('yesterday')).toBe(false);
+    expect(isCalendarDate(20260101)).toBe(false);
+  });
+
+  it('allows up to one day past UTC today, so no time zone refuses its own today', () => {
+    expect(latestAllowedDate(new Date('2026-12-01T23:30:00Z'))).toBe('2026-12-02');
+  });
+});

@@ -6,3 +6,4 @@ export * from './diagnosis.js';
 export * from './air/index.js';
 export * from './units/index.js';
 export * from './jetting/index.js';
+export * from './cases.js';

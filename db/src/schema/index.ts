@@ -2,3 +2,5 @@ export * from './users.js';
 export * from './sessions.js';
 export * from './karts.js';
 export * from './setups.js';
+export * from './cases.js';
+export * from './jetting.js';

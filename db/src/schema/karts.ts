@@ -1,4 +1,4 @@
-import { index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { CARBURETTOR_KINDS, DRIVES } from '@fuelwright/shared';
 import { users } from './users.js';
 
@@ -18,6 +18,8 @@ export const karts = pgTable(
     drive: driveEnum('drive').notNull(),
     carburettorKind: carburettorKindEnum('carburettor_kind').notNull(),
     notes: text('notes').notNull().default(''),
+    /** The racer's jet kit: how jet numbers scale and which sizes are held (null = not set). */
+    jetKit: jsonb('jet_kit'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -1,4 +1,4 @@
-import { pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { ROLES } from '@fuelwright/shared';
 
 export const roleEnum = pgEnum('role', ROLES);
@@ -10,6 +10,8 @@ export const users = pgTable('users', {
   displayName: text('display_name').notNull(),
   passwordHash: text('password_hash').notNull(),
   role: roleEnum('role').notNull().default('racer'),
+  /** Display units and other per-user choices (shape owned by the service; empty = defaults). */
+  preferences: jsonb('preferences').notNull().default({}),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });

@@ -1,6 +1,6 @@
 import { Button, NonIdealState } from '@blueprintjs/core';
 import { OfflineIcon } from '@blueprintjs/icons';
-import { Navigate, Outlet, useLocation, useSearchParams } from 'react-router-dom';
+import { Navigate, Outlet, useLocation, useNavigation, useSearchParams } from 'react-router-dom';
 import { useMe } from '../../features/auth/api/get-me';
 import { useSigningOut } from '../../features/auth/api/sign-out';
 import { PageSpinner } from '../../components/page-spinner';
@@ -18,6 +18,9 @@ export function RequireAccess({ access }: { access: Access }) {
   const location = useLocation();
   const [searchParams] = useSearchParams();
   const signingOut = useSigningOut();
+  // While another navigation is under way (sign-out going to the start page, an expired session
+  // going to sign-in) this page is on its way out: redirecting from it would race that navigation.
+  const leaving = useNavigation().state !== 'idle';
 
   if (access === 'anyone') return <Outlet />;
 
@@ -43,8 +46,10 @@ export function RequireAccess({ access }: { access: Access }) {
     case 'sign-in':
       // Signing out on purpose: the sign-out handler is taking the user elsewhere.
       if (signingOut) return <PageSpinner label="Signing out" />;
+      if (leaving) return <PageSpinner />;
       return <Navigate to={signInPath(location.pathname + location.search + location.hash)} replace />;
     case 'home':
+      if (leaving) return <PageSpinner />;
       return <Navigate to={safeNextPath(searchParams.get(NEXT_PARAM)) ?? paths.home} replace />;
     case 'forbidden':
       return <ForbiddenPage />;

@@ -21,12 +21,17 @@ import { ThemeToggleButton } from './theme-switch';
  */
 export function AppNavbar({ user, sessionPending }: { user: UserDto | null; sessionPending: boolean }) {
   const isPhone = useIsPhone();
-  const items = menuItemsFor(user);
+  // Until the session check answers, show no entries rather than the visitor's menu.
+  const items = sessionPending ? [] : menuItemsFor(user);
   const [drawerOpen, setDrawerOpen] = useState(false);
   const location = useLocation();
   const navigate = useNavigate();
   const notify = useNotify();
-  const signOut = useSignOut({ onSignedOut: () => navigate(paths.landing, { replace: true }) });
+  const signOut = useSignOut({
+    // flushSync: the start page must replace the guarded page before the sign-out settles, else
+    // that page's guard would see no session and send the user to sign-in.
+    onSignedOut: () => navigate(paths.landing, { replace: true, flushSync: true }),
+  });
 
   // Any navigation closes the drawer (also the browser's back button).
   useEffect(() => setDrawerOpen(false), [location.pathname]);

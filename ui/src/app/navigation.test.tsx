@@ -1,0 +1,49 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import type { Role } from '@fuelwright/shared';
+import { makeUser, meReply, mockApi, renderApp, setPhoneWidth } from '../test-utils';
+import { menuItemsFor } from './navigation';
+
+// What each role may use comes from the product design (PRODUCT.md, "Who uses it, and for what").
+const EXPECTED: Record<Role | 'visitor', string[]> = {
+  visitor: ['Quick diagnosis'],
+  racer: ['Home', 'Karts', 'Cases', 'Quick diagnosis'],
+  coach: ['Home', 'Shared cases', 'Quick diagnosis'],
+  shop: ['Home', 'Work orders', 'Outcomes', 'Quick diagnosis'],
+  admin: ['Home', 'Users', 'Outcomes', 'Rulesets', 'Quick diagnosis'],
+};
+
+describe('navigation menu', () => {
+  it.each(Object.entries(EXPECTED))('lists only what a %s may use', (who, labels) => {
+    const user = who === 'visitor' ? null : makeUser(who as Role);
+    expect(menuItemsFor(user).map((item) => item.label)).toEqual(labels);
+  });
+
+  it('shows the admin menu inline in the desktop navbar, with the name and sign-out', async () => {
+    setPhoneWidth(false);
+    mockApi({ 'GET /auth/me': meReply(makeUser('admin', { displayName: 'Ada Admin' })) });
+    renderApp('/home');
+    expect(await screen.findByText('Ada Admin')).toBeInTheDocument();
+    const nav = screen.getByRole('navigation', { name: 'Main' });
+    const links = within(nav).getAllByRole('button').map((link) => link.textContent);
+    expect(links).toEqual(EXPECTED.admin);
+    expect(screen.getByText('Ada Admin')).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
+    expect(within(nav).queryByText('Karts')).toBeNull();
+  });
+
+  it('puts the racer menu in a drawer on phone widths', async () => {
+    setPhoneWidth(true);
+    mockApi({ 'GET /auth/me': meReply(makeUser('racer', { displayName: 'Rae Racer' })) });
+    renderApp('/home');
+    expect(await screen.findByRole('heading', { name: 'Hello, Rae Racer' })).toBeInTheDocument();
+    expect(screen.queryByRole('navigation', { name: 'Main' })).toBeNull();
+
+    await userEvent.setup().click(screen.getByRole('button', { name: 'Open menu' }));
+    const nav = await screen.findByRole('navigation', { name: 'Main' });
+    expect(within(nav).getAllByRole('menuitem').map((item) => item.textContent)).toEqual(EXPECTED.racer);
+    expect(within(nav).queryByText('Users')).toBeNull();
+    expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
+  });
+});

@@ -9,6 +9,9 @@ import { DatabaseModule } from './database/database.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { UsersModule } from './users/users.module.js';
 import { KartsModule } from './karts/karts.module.js';
+import { ConditionsModule } from './conditions/conditions.module.js';
+import { JettingModule } from './jetting/jetting.module.js';
+import { PreferencesModule } from './preferences/preferences.module.js';
 import { AccessModule } from './common/access/access.module.js';
 import { HealthController } from './health/health.controller.js';
 import { SessionGuard } from './common/guards/session.guard.js';
@@ -39,6 +42,9 @@ export class AppModule {
         AuthModule,
         UsersModule,
         KartsModule,
+        ConditionsModule,
+        JettingModule,
+        PreferencesModule,
       ],
       controllers: [HealthController],
       providers: [

@@ -7,3 +7,4 @@ export * from './air/index.js';
 export * from './units/index.js';
 export * from './jetting/index.js';
 export * from './cases.js';
+export * from './jetting-log.js';

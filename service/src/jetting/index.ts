@@ -1,0 +1,2 @@
+export { JettingModule } from './jetting.module.js';
+export { AirDensityBaseline, type AirDensityBaselineDay } from './air-density-baseline.js';

@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { sql } from 'drizzle-orm';
-import type { Role, SetupInput } from '@fuelwright/shared';
+import { computeAir, type JettingSessionInput, type Role, type SetupInput } from '@fuelwright/shared';
 import type { Db } from './client.js';
-import { karts, setups, users } from './schema/index.js';
+import { jettingSessions, karts, setups, users } from './schema/index.js';
 
 export const DEMO_FIXTURE_PATH = new URL('../../fixtures/demo-club.json', import.meta.url);
 
@@ -20,6 +20,8 @@ export interface DemoFixture {
   }[];
   /** Setup snapshots, by kart name. */
   setups?: (SetupInput & { kart: string })[];
+  /** Jetting log sessions, by kart name; the densities are computed from the air when seeding. */
+  jettingSessions?: (JettingSessionInput & { kart: string; stationPressureHpa: number })[];
 }
 
 export function readDemoFixture(): DemoFixture {
@@ -63,6 +65,17 @@ export async function seedDemoIfEmpty(
           const k = kartByName.get(kart);
           if (!k) throw new Error(`demo fixture: setup names unknown kart "${kart}"`);
           return { ...values, note: note ?? '', kartId: k.id, createdBy: k.ownerId };
+        }),
+      );
+    }
+    const sessions = fixture.jettingSessions ?? [];
+    if (sessions.length > 0) {
+      await tx.insert(jettingSessions).values(
+        sessions.map(({ kart, note, track, altitudeM: _a, seaLevelPressureHpa: _q, ...s }) => {
+          const k = kartByName.get(kart);
+          if (!k) throw new Error(`demo fixture: jetting session names unknown kart "${kart}"`);
+          const air = computeAir({ temperatureC: s.temperatureC, stationPressureHpa: s.stationPressureHpa, relativeHumidityPct: s.relativeHumidityPct });
+          return { ...s, track: track ?? '', note: note ?? '', densityKgM3: air.densityKgM3, dryAirDensityKgM3: air.dryAirDensityKgM3, kartId: k.id, createdBy: k.ownerId };
         }),
       );
     }

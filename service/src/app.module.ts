@@ -9,6 +9,8 @@ import { DatabaseModule } from './database/database.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { UsersModule } from './users/users.module.js';
 import { KartsModule } from './karts/karts.module.js';
+import { CasesModule } from './cases/cases.module.js';
+import { DiagnosisModule } from './diagnosis/diagnosis.module.js';
 import { ConditionsModule } from './conditions/conditions.module.js';
 import { JettingModule } from './jetting/jetting.module.js';
 import { PreferencesModule } from './preferences/preferences.module.js';
@@ -42,6 +44,8 @@ export class AppModule {
         AuthModule,
         UsersModule,
         KartsModule,
+        DiagnosisModule,
+        CasesModule,
         ConditionsModule,
         JettingModule,
         PreferencesModule,

@@ -2,7 +2,7 @@
  * Case contracts (/api/cases). A case is one running problem on one kart. It is never changed in
  * place: every step is an appended event (who, when, what), and the case is the replay of them.
  */
-import type { CheckResultValue, DiagnosisConditions, RankResponse, StopFinding, SymptomReport } from './diagnosis.js';
+import type { CheckResultValue, DiagnosisConditions, RankResponse, StopFinding, SymptomInput, SymptomReport } from './diagnosis.js';
 import type { SetupSnapshot } from './setup.js';
 
 export const CASE_STATES = ['open', 'resolved', 'abandoned', 'stopped'] as const;
@@ -23,7 +23,8 @@ export const CASE_NOTE_MAX_LENGTH = 1000;
 /** POST /api/cases */
 export interface OpenCaseRequest {
   kartId: string;
-  symptoms: SymptomReport[];
+  /** Bare symptom ids or { id, band, engine, where }; stored as the latter. */
+  symptoms: SymptomInput[];
   /** The setup at the time; when absent, the kart's latest snapshot is used. */
   setup?: SetupSnapshot;
   conditions?: DiagnosisConditions;
@@ -33,7 +34,7 @@ export interface OpenCaseRequest {
 
 /** PUT /api/cases/:id/symptoms */
 export interface ReportSymptomsRequest {
-  symptoms: SymptomReport[];
+  symptoms: SymptomInput[];
 }
 
 /** POST /api/cases/:id/results */

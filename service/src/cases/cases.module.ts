@@ -1,0 +1,30 @@
+import { Module } from '@nestjs/common';
+import { DiagnosisModule } from '../diagnosis/diagnosis.module.js';
+import { CasesController } from './cases.controller.js';
+import { CaseRanking } from './case-ranking.js';
+import { CaseStore } from './case-store.js';
+import { AbandonCaseHandler } from './commands/abandon-case.handler.js';
+import { OpenCaseHandler } from './commands/open-case.handler.js';
+import { RecordCheckResultHandler } from './commands/record-check-result.handler.js';
+import { ReportSymptomsHandler } from './commands/report-symptoms.handler.js';
+import { ResolveCaseHandler } from './commands/resolve-case.handler.js';
+import { GetCaseHandler } from './queries/get-case.handler.js';
+import { ListCasesHandler } from './queries/list-cases.handler.js';
+
+const handlers = [
+  OpenCaseHandler,
+  ReportSymptomsHandler,
+  RecordCheckResultHandler,
+  ResolveCaseHandler,
+  AbandonCaseHandler,
+  GetCaseHandler,
+  ListCasesHandler,
+];
+
+@Module({
+  imports: [DiagnosisModule],
+  controllers: [CasesController],
+  providers: [CaseStore, CaseRanking, ...handlers],
+  exports: [CaseStore],
+})
+export class CasesModule {}

@@ -29,12 +29,13 @@ export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
     this.access.require(user, kart, 'edit', 'kart');
     const setup: SetupSnapshot = { ...(input.setup ?? (await this.latestSetup(kart.id))), carburettorKind: kart.carburettorKind };
     const conditions = input.conditions ?? {};
+    const symptoms = input.symptoms.map((s) => (typeof s === 'string' ? { id: s } : s));
     const version = this.ranking.currentVersion;
 
     // Rank every step first: a bad id anywhere refuses the whole request and nothing is written.
-    const facts = { symptoms: input.symptoms, setup, conditions, results: {} as Record<string, CheckResultValue>, displacementCc: kart.displacementCc };
+    const facts = { symptoms, setup, conditions, results: {} as Record<string, CheckResultValue>, displacementCc: kart.displacementCc };
     const events: NewCaseEvent[] = [
-      { type: 'opened', payload: { kartId: kart.id, symptoms: input.symptoms, setup, conditions, rulesetVersion: version, rank: await this.ranking.rank(facts, version) } },
+      { type: 'opened', payload: { kartId: kart.id, symptoms, setup, conditions, rulesetVersion: version, rank: await this.ranking.rank(facts, version) } },
     ];
     const seen = new Set<string>();
     for (const [i, r] of (input.results ?? []).entries()) {

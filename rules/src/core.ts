@@ -38,7 +38,7 @@ export interface CompiledRule {
   position: number;
   /** Index bucket: `symptom:<id>`, `check:<id>` or `*`. */
   bucket: string;
-  /** Symptoms the rule requires (its top-level `all` holds `shows` on them). */
+  /** Symptoms the rule requires (its top-level `all` holds `shows` or `showsOnly` on them). */
   requiresSymptoms: string[];
 }
 
@@ -75,7 +75,7 @@ function compileRule(def: RuleDefinition, position: number): CompiledRule {
   let bucket = ALWAYS_BUCKET;
   for (const leaf of leaves) {
     if (!('fact' in leaf)) continue;
-    if (leaf.fact === 'symptoms' && leaf.operator === 'shows') {
+    if (leaf.fact === 'symptoms' && (leaf.operator === 'shows' || leaf.operator === 'showsOnly')) {
       const symptom = (leaf.value as { symptom: string }).symptom;
       requiresSymptoms.push(symptom);
       if (bucket === ALWAYS_BUCKET) bucket = `symptom:${symptom}`;

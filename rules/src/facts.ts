@@ -113,7 +113,7 @@ const setupNumber = (field: keyof typeof SETUP_RANGES, description: string): Fac
 export const FACTS: readonly FactDefinition[] = [
   {
     id: 'symptoms',
-    description: 'The reported symptoms with where they show (use the `shows` operator).',
+    description: 'The reported symptoms with where they show (use the `shows` or `showsOnly` operator).',
     type: { kind: 'symptoms' },
     compute: ({ request }) => new Map(request.symptoms.map((s) => [s.id, s])),
   },

@@ -36,6 +36,24 @@ export function shows(index: SymptomIndex, value: ShowsValue): boolean {
   return overlaps(value.band, s.bands) && overlaps(value.engine, s.engine) && overlaps(value.where, s.where);
 }
 
+function within(wanted: readonly string[] | undefined, reported: readonly string[]): boolean {
+  if (!wanted) return true;
+  if (reported.length === 0) return false;
+  for (const r of reported) if (!wanted.includes(r)) return false;
+  return true;
+}
+
+/**
+ * True when the symptom was reported and, for each detail the rule names, the report names that
+ * detail and every value it names is in the rule's list: "shows only there". Used for evidence
+ * against a circuit when the symptom shows only away from it.
+ */
+export function showsOnly(index: SymptomIndex, value: ShowsValue): boolean {
+  const s = index.get(value.symptom);
+  if (!s) return false;
+  return within(value.band, s.bands) && within(value.engine, s.engine) && within(value.where, s.where);
+}
+
 export function resultIs(index: CheckResultIndex, value: ResultIsValue): boolean {
   return index.get(value.check) === value.result;
 }
@@ -56,12 +74,14 @@ export const OPERATORS: Readonly<Record<string, OperatorFn>> = {
   greaterThan: (a, b) => isNumberLike(a) && a > b,
   greaterThanInclusive: (a, b) => isNumberLike(a) && a >= b,
   shows: (a, b) => shows(a, b),
+  showsOnly: (a, b) => showsOnly(a, b),
   resultIs: (a, b) => resultIs(a, b),
 };
 
 /** The custom operators to register with json-rules-engine. */
-export const CUSTOM_OPERATORS: Readonly<Record<'shows' | 'resultIs', OperatorFn>> = {
+export const CUSTOM_OPERATORS: Readonly<Record<'shows' | 'showsOnly' | 'resultIs', OperatorFn>> = {
   shows: OPERATORS.shows,
+  showsOnly: OPERATORS.showsOnly,
   resultIs: OPERATORS.resultIs,
 };
 
@@ -70,6 +90,6 @@ export const OPERATORS_BY_FACT_KIND: Readonly<Record<FactType['kind'], readonly 
   number: ['equal', 'notEqual', 'lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive', 'in', 'notIn'],
   enum: ['equal', 'notEqual', 'in', 'notIn'],
   boolean: ['equal', 'notEqual'],
-  symptoms: ['shows'],
+  symptoms: ['shows', 'showsOnly'],
   checkResults: ['resultIs'],
 };

@@ -84,7 +84,7 @@ export function isPilotJetStep(size: number): boolean {
 /** Which causes the circuit of each throttle band points at first. */
 export const BAND_CIRCUIT_CAUSES: Record<ThrottleBand, readonly string[]> = {
   closed: ['pilot-jet-wrong-or-blocked', 'air-screw-too-far-out', 'air-screw-too-far-in'],
-  'up-to-quarter': ['slide-sticking-or-misfitted'],
+  'up-to-quarter': ['slide-cutaway-wrong', 'slide-sticking-or-misfitted'],
   'quarter-to-three-quarters': ['needle-clip-wrong-groove', 'needle-or-clip-worn'],
   'three-quarters-to-full': ['main-jet-too-small', 'main-jet-too-large'],
 };

@@ -147,7 +147,7 @@ export function validateCatalog(raw: unknown): { catalog?: Catalog; issues: Rule
       if (seen.has(t.cause)) add(rule, `tests[${j}].cause`, `cause "${t.cause}" listed twice`);
       seen.add(t.cause);
       tested.add(t.cause);
-      if (t.sensitivity <= 1 - check.specificity) {
+      if (t.sensitivity <= 1 - check.specificity + 1e-9) {
         add(rule, `tests[${j}].sensitivity`, `must be greater than 1 - specificity (${(1 - check.specificity).toFixed(2)}), else a found fault would not point at the cause`);
       }
     });
@@ -215,6 +215,9 @@ function checkLeafValue(type: FactType, operator: string, value: unknown, field:
       if (value.band !== undefined) checkEnumList(value.band, THROTTLE_BANDS, `${field}.band`, out);
       if (value.engine !== undefined) checkEnumList(value.engine, ENGINE_TEMPS, `${field}.engine`, out);
       if (value.where !== undefined) checkEnumList(value.where, TRACK_POSITIONS, `${field}.where`, out);
+      if (operator === 'showsOnly' && value.band === undefined && value.engine === undefined && value.where === undefined) {
+        out(field, '"showsOnly" needs band, engine or where (else use "shows")');
+      }
       return;
     }
     case 'checkResults': {

@@ -1,0 +1,224 @@
+/**
+ * The facts of the trade the knowledge base holds, each checked both as stated (constants and
+ * small functions in trade.ts, catalog text) and in the ranking it drives.
+ */
+import { describe, expect, it } from 'vitest';
+import { THROTTLE_BAND_INFO, THROTTLE_BANDS } from '@fuelwright/shared';
+import {
+  AIR_SCREW_STEP_TURNS,
+  AIR_SCREW_USUAL_TURNS_OUT,
+  BAND_CIRCUIT_CAUSES,
+  MAIN_JET_USUAL_80CC,
+  NEEDLE_CLIP_COUNTED_FROM,
+  PILOT_JET_STEP,
+  PILOT_JET_USUAL_80CC,
+  RACING_IDLE_SCREW,
+  airScrewEffect,
+  densityChangePct,
+  densityEffect,
+  idleScrewEffect,
+  isPilotJetStep,
+  needleClipFor,
+  nextAirScrewSetting,
+  vsUsual,
+} from './trade.js';
+import { computeFacts, type NormalisedRankRequest } from './facts.js';
+import { AS_OF, ids, prob, rank, rankOf, ruleset } from './test-support/shipped.js';
+
+const factsOf = (setup: NormalisedRankRequest['setup'], extra: Partial<NormalisedRankRequest> = {}) =>
+  computeFacts({ symptoms: [], setup, conditions: {}, results: {}, ...extra }, new Date(AS_OF));
+const check = (id: string) => ruleset.catalog.checks.find((c) => c.id === id)!;
+
+describe('air screw', () => {
+  it('is usually set 1 to 2 turns out from lightly seated', () => {
+    // Source: common practice, no published source.
+    expect(AIR_SCREW_USUAL_TURNS_OUT).toEqual({ min: 1, max: 2 });
+    expect(factsOf({ airScrewTurnsOut: 1.5 }).get('airScrewVsUsual')).toBe('within');
+    expect(factsOf({ airScrewTurnsOut: 2.75 }).get('airScrewVsUsual')).toBe('above');
+    expect(factsOf({ airScrewTurnsOut: 0.5 }).get('airScrewVsUsual')).toBe('below');
+  });
+
+  it('turned out leans the low-to-mid range, turned in richens it', () => {
+    // Source: common practice, no published source.
+    expect(airScrewEffect('out').mixture).toBe('leaner');
+    expect(airScrewEffect('in').mixture).toBe('richer');
+    expect(airScrewEffect('out').bands).toContain('closed');
+    expect(airScrewEffect('out').bands).not.toContain('three-quarters-to-full');
+  });
+
+  it('is adjusted in quarter turns', () => {
+    // Source: common practice, no published source.
+    expect(AIR_SCREW_STEP_TURNS).toBe(0.25);
+    expect(nextAirScrewSetting(1.5, 'leaner')).toBe(1.75);
+    expect(nextAirScrewSetting(1.5, 'richer')).toBe(1.25);
+    expect(nextAirScrewSetting(0.1, 'richer')).toBe(0);
+  });
+
+  it('set well out, with a bog off the bottom, ranks "too far out" first; nearly seated and rich off the bottom, "too far in"', async () => {
+    // Source: common practice, no published source.
+    const out = await rank({ symptoms: [{ id: 'bog-on-acceleration', band: 'closed' }], setup: { airScrewTurnsOut: 2.75 } });
+    expect(ids(out, 1)).toEqual(['air-screw-too-far-out']);
+    const inn = await rank({ symptoms: [{ id: 'rich-blubber', band: 'closed' }], setup: { airScrewTurnsOut: 0.5 } });
+    expect(ids(inn, 1)).toEqual(['air-screw-too-far-in']);
+    // Within the usual range, both air screw causes lose ground.
+    const usual = await rank({ symptoms: [{ id: 'bog-on-acceleration', band: 'closed' }], setup: { airScrewTurnsOut: 1.5 } });
+    const unknown = await rank({ symptoms: [{ id: 'bog-on-acceleration', band: 'closed' }] });
+    expect(prob(usual, 'air-screw-too-far-out')).toBeLessThan(prob(unknown, 'air-screw-too-far-out'));
+  });
+});
+
+describe('idle screw', () => {
+  it('turned in (clockwise) raises the slide and the idle', () => {
+    // Source: common practice, no published source.
+    expect(idleScrewEffect('clockwise')).toEqual({ slide: 'raised', idle: 'higher' });
+    expect(idleScrewEffect('anticlockwise')).toEqual({ slide: 'lowered', idle: 'lower' });
+  });
+
+  it('racers usually run with no idle; an idle slows the engine down more slowly off throttle', async () => {
+    // Source: common practice, no published source.
+    expect(RACING_IDLE_SCREW).toBe('backed-off');
+    const set = await rank({ symptoms: [{ id: 'slow-deceleration', where: 'corner-entry' }], setup: { idleScrew: 'set' } });
+    expect(ids(set, 1)).toEqual(['idle-screw-set']);
+    const backedOff = await rank({ symptoms: ['slow-deceleration'], setup: { idleScrew: 'backed-off' } });
+    expect(ids(backedOff, 1)).not.toEqual(['idle-screw-set']);
+    expect(prob(backedOff, 'idle-screw-set')).toBeLessThan(prob(set, 'idle-screw-set') / 5);
+    expect(set.causes[0].reasons.map((r) => r.text).join(' ')).toMatch(/slow down more slowly/);
+  });
+});
+
+describe('vent lines', () => {
+  it('should be fitted and routed upward; without them fuel sloshes out of the vent nipples', async () => {
+    // Source: common practice, no published source.
+    expect(check('vent-lines-look').steps.join(' ')).toMatch(/routed upward/);
+    const off = await rank({ symptoms: ['fuel-from-vents'], setup: { ventLinesFitted: false } });
+    expect(ids(off, 1)).toEqual(['vent-lines-off']);
+    expect(prob(off, 'vent-lines-off')).toBeGreaterThan(0.7);
+    const notUp = await rank({ symptoms: ['fuel-from-vents'], setup: { ventLinesFitted: true, ventLinesRoutedUp: false } });
+    const good = await rank({ symptoms: ['fuel-from-vents'], setup: { ventLinesFitted: true, ventLinesRoutedUp: true } });
+    expect(prob(notUp, 'vent-lines-off')).toBeGreaterThan(prob(good, 'vent-lines-off') * 5);
+  });
+});
+
+describe('pump-around bowl foam', () => {
+  it('missing or rotten foam causes bogging, hesitation or sporadic running', async () => {
+    // Source: common practice, no published source.
+    const baseline = await rank({ symptoms: [], setup: { carburettorKind: 'pump-around' } });
+    for (const symptom of ['bog-on-acceleration', 'hesitation', 'sporadic-running']) {
+      const res = await rank({ symptoms: [symptom], setup: { carburettorKind: 'pump-around' } });
+      expect(prob(res, 'foam-degraded'), symptom).toBeGreaterThan(prob(baseline, 'foam-degraded') * 1.5);
+      expect(rankOf(res, 'foam-degraded'), symptom).toBeLessThan(5);
+    }
+  });
+
+  it('is a pump-around part: on a float-valve carburettor the cause and its check are left out', async () => {
+    // Source: common practice, no published source.
+    const res = await rank({ symptoms: ['sporadic-running'], setup: { carburettorKind: 'float-valve' } });
+    expect(ids(res)).not.toContain('foam-degraded');
+    expect(res.excluded.map((e) => e.id)).toContain('foam-degraded');
+    expect(res.plan.map((s) => s.checkId)).not.toContain('foam-inspect');
+  });
+});
+
+describe('splash plate', () => {
+  it('should be flat and fits one way only; bent, it uncovers the main jet', async () => {
+    // Source: common practice, no published source.
+    const steps = check('splash-plate-inspect').steps.join(' ');
+    expect(steps).toMatch(/flat/);
+    expect(steps).toMatch(/fits one way only/);
+    const cause = ruleset.catalog.causes.find((c) => c.id === 'splash-plate-bent')!;
+    expect(cause.description).toMatch(/main jet/);
+    const res = await rank({ symptoms: [{ id: 'cuts-out-in-corners', where: 'corner-exit' }], setup: { carburettorKind: 'pump-around' } });
+    expect(ids(res, 3)).toContain('splash-plate-bent');
+  });
+});
+
+describe('jets and needle', () => {
+  it('main jets for an 80 cc two-stroke shifter run roughly 175 to 190', () => {
+    // Source: common practice, no published source.
+    expect(MAIN_JET_USUAL_80CC).toEqual({ min: 175, max: 190 });
+    expect(factsOf({ mainJet: 170 }).get('mainJetVsUsual80cc')).toBe('below');
+    expect(factsOf({ mainJet: 182.5 }).get('mainJetVsUsual80cc')).toBe('within');
+    expect(factsOf({ mainJet: 195 }).get('mainJetVsUsual80cc')).toBe('above');
+    // The habit is for 80 cc engines only.
+    expect(factsOf({ mainJet: 170 }, { engineDisplacementCc: 125 }).get('mainJetVsUsual80cc')).toBeUndefined();
+  });
+
+  it('pilot jets run 35 to 40, in steps of 2.5', () => {
+    // Source: common practice, no published source.
+    expect(PILOT_JET_USUAL_80CC).toEqual({ min: 35, max: 40 });
+    expect(PILOT_JET_STEP).toBe(2.5);
+    expect([35, 37.5, 40].every(isPilotJetStep)).toBe(true);
+    expect(isPilotJetStep(36)).toBe(false);
+    expect(factsOf({ pilotJet: 32.5 }).get('pilotJetVsUsual80cc')).toBe('below');
+  });
+
+  it('needle clip grooves are counted from the top; a lower groove raises the needle and richens', () => {
+    // Source: common practice, no published source.
+    expect(NEEDLE_CLIP_COUNTED_FROM).toBe('top');
+    expect(needleClipFor(3, 'richer')).toBe(4);
+    expect(needleClipFor(3, 'leaner')).toBe(2);
+    expect(needleClipFor(1, 'leaner')).toBe(1);
+    expect(check('needle-inspect').steps[0]).toMatch(/from the top/);
+  });
+
+  it('a main jet below the usual size strengthens "too small" for a lean top end', async () => {
+    // Source: common practice, no published source.
+    const small = await rank({ symptoms: ['lean-top-end'], setup: { mainJet: 165 } });
+    const usual = await rank({ symptoms: ['lean-top-end'], setup: { mainJet: 180 } });
+    expect(prob(small, 'main-jet-too-small')).toBeGreaterThan(prob(usual, 'main-jet-too-small'));
+  });
+});
+
+describe('circuits by throttle opening', () => {
+  it('closed to 1/8 pilot jet and air screw, 1/8 to 1/4 slide cutaway, 1/4 to 3/4 needle, 3/4 to full main jet', () => {
+    // Source: general carburettor tuning practice; common practice, no published source.
+    expect(THROTTLE_BANDS.map((b) => THROTTLE_BAND_INFO[b].circuit)).toEqual([
+      'Pilot jet and air screw',
+      'Slide cutaway',
+      'Needle and clip position',
+      'Main jet',
+    ]);
+    expect(THROTTLE_BANDS.map((b) => [THROTTLE_BAND_INFO[b].from, THROTTLE_BAND_INFO[b].to])).toEqual([
+      [0, 0.125],
+      [0.125, 0.25],
+      [0.25, 0.75],
+      [0.75, 1],
+    ]);
+  });
+
+  it('a bog in each band puts that band\'s circuit first', async () => {
+    // Source: general carburettor tuning practice; common practice, no published source.
+    for (const band of THROTTLE_BANDS) {
+      const res = await rank({ symptoms: [{ id: 'bog-on-acceleration', band }], setup: { carburettorKind: 'float-valve' } });
+      expect(BAND_CIRCUIT_CAUSES[band], band).toContain(res.causes[0].id);
+    }
+  });
+});
+
+describe('air density', () => {
+  it('denser air leans the mixture, thinner air richens it', () => {
+    // Source: from memory (fuel through a jet scales with the square root of the air density,
+    // air mass with the density, so the mixture leans as density rises); common practice.
+    expect(densityEffect(4)).toBe('leaner');
+    expect(densityEffect(-4)).toBe('richer');
+    expect(densityEffect(0)).toBe('unchanged');
+  });
+
+  it('the change is worked out from two densities, positive when today is denser', () => {
+    // Hand-computed: (1.225 - 1.180) / 1.180 * 100 = 3.8136 %.
+    expect(densityChangePct(1.225, 1.18)).toBeCloseTo(3.8136, 4);
+    expect(factsOf({}, { conditions: { today: { densityKgM3: 1.225 }, reference: { densityKgM3: 1.18 } } }).get('densityChangePct')).toBeCloseTo(3.8136, 4);
+    expect(factsOf({}, { conditions: { densityChangePct: -2, today: { densityKgM3: 1.225 }, reference: { densityKgM3: 1.18 } } }).get('densityChangePct')).toBe(-2);
+  });
+
+  it('a lean top end with denser air puts the main jet and the air change first; rich with thinner air, the reverse', async () => {
+    // Source: common practice, no published source.
+    const lean = await rank({ symptoms: ['lean-top-end'], conditions: { densityChangePct: 5 } });
+    expect(ids(lean, 2).sort()).toEqual(['air-density-changed', 'main-jet-too-small']);
+    const rich = await rank({ symptoms: ['rich-blubber'], conditions: { densityChangePct: -5 } });
+    expect(ids(rich, 2).sort()).toEqual(['air-density-changed', 'main-jet-too-large']);
+    // Thinner air does not explain a lean top end.
+    const wrongWay = await rank({ symptoms: ['lean-top-end'], conditions: { densityChangePct: -5 } });
+    expect(prob(wrongWay, 'air-density-changed')).toBeLessThan(prob(lean, 'air-density-changed') / 5);
+  });
+});

@@ -14,7 +14,7 @@ export function PasswordField(props: Omit<ComponentProps<typeof TextField>, 'typ
       autoCapitalize="none"
       rightElement={
         <Button
-          className="fw-touch"
+          className="fw-password-toggle"
           variant="minimal"
           icon={visible ? <EyeOffIcon /> : <EyeOpenIcon />}
           aria-label={visible ? 'Hide password' : 'Show password'}

@@ -1,7 +1,10 @@
 import { useSyncExternalStore } from 'react';
 
-/** Phone widths: the navigation menu moves into a drawer and controls grow. */
-export const PHONE_QUERY = '(max-width: 767px)';
+/**
+ * Below this width the navbar has no room for a role's menu, the name and sign-out: the menu
+ * moves into a drawer (phones and small tablets). Phone styles in app.css start at 767px.
+ */
+export const COMPACT_NAV_QUERY = '(max-width: 1199px)';
 
 export function useMediaQuery(query: string): boolean {
   return useSyncExternalStore(
@@ -16,6 +19,6 @@ export function useMediaQuery(query: string): boolean {
   );
 }
 
-export function useIsPhone(): boolean {
-  return useMediaQuery(PHONE_QUERY);
+export function useCompactNav(): boolean {
+  return useMediaQuery(COMPACT_NAV_QUERY);
 }

@@ -7,7 +7,7 @@ import { LinkButton } from '../../components/link-button';
 import { useNotify } from '../../components/toaster';
 import { Wordmark } from '../../components/wordmark';
 import { useSignOut } from '../../features/auth/api/sign-out';
-import { useIsPhone } from '../../lib/use-media-query';
+import { useCompactNav } from '../../lib/use-media-query';
 import { menuItemsFor } from '../navigation';
 import { paths, signInPath } from '../paths';
 import { NavDrawer } from './nav-drawer';
@@ -17,10 +17,10 @@ import { ThemeToggleButton } from './theme-switch';
 
 /**
  * The navbar: wordmark, the menu of what this viewer may use (inline on desktop, in a drawer on
- * phone widths), the theme switch, and the account (name and sign-out, or sign-in for visitors).
+ * phone and small tablet widths), the theme switch, and the account (name and sign-out, or sign-in for visitors).
  */
 export function AppNavbar({ user, sessionPending }: { user: UserDto | null; sessionPending: boolean }) {
-  const isPhone = useIsPhone();
+  const isPhone = useCompactNav();
   // Until the session check answers, show no entries rather than the visitor's menu.
   const items = sessionPending ? [] : menuItemsFor(user);
   const [drawerOpen, setDrawerOpen] = useState(false);

@@ -1,5 +1,5 @@
 import { Button, Divider, Drawer, Menu, Position, Tag } from '@blueprintjs/core';
-import { LogInIcon, LogOutIcon, NewPersonIcon } from '@blueprintjs/icons';
+import { CrossIcon, LogInIcon, LogOutIcon, NewPersonIcon } from '@blueprintjs/icons';
 import { useLocation, useMatch } from 'react-router-dom';
 import type { UserDto } from '@fuelwright/shared';
 import { LinkButton, LinkMenuItem } from '../../components/link-button';
@@ -49,9 +49,19 @@ export function NavDrawer({
       onClose={onClose}
       position={Position.LEFT}
       size="min(320px, 88vw)"
-      title={<Wordmark size={24} />}
       aria-label="Menu"
     >
+      <div className="fw-nav-drawer-head">
+        <Wordmark size={24} />
+        <Button
+          className="fw-touch"
+          variant="minimal"
+          size="large"
+          icon={<CrossIcon size={20} />}
+          aria-label="Close menu"
+          onClick={onClose}
+        />
+      </div>
       <div className="fw-nav-drawer-body">
         {user && (
           <div className="fw-nav-drawer-user">

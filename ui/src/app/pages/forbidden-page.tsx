@@ -1,6 +1,7 @@
 import { NonIdealState } from '@blueprintjs/core';
 import { LockIcon } from '@blueprintjs/icons';
 import { LinkButton } from '../../components/link-button';
+import { Page } from '../../components/page';
 import { useCurrentUser } from '../../lib/current-user';
 import { ROLE_LABELS } from '../../lib/roles';
 import { paths } from '../paths';
@@ -9,10 +10,9 @@ import { paths } from '../paths';
 export function ForbiddenPage() {
   const user = useCurrentUser();
   return (
-    <div className="fw-page">
+    <Page title="Not for your role">
       <NonIdealState
         icon={<LockIcon size={48} />}
-        title="Not for your role"
         description={
           user
             ? `This screen is not part of what a ${ROLE_LABELS[user.role].toLowerCase()} account can use. If you need it, ask an admin to change your role.`
@@ -20,6 +20,6 @@ export function ForbiddenPage() {
         }
         action={<LinkButton size="large" intent="primary" to={paths.home} text="Go to your home page" />}
       />
-    </div>
+    </Page>
   );
 }

@@ -2,6 +2,7 @@ import { NonIdealState } from '@blueprintjs/core';
 import { MapMarkerIcon } from '@blueprintjs/icons';
 import { useLocation } from 'react-router-dom';
 import { LinkButton } from '../../components/link-button';
+import { Page } from '../../components/page';
 import { useCurrentUser } from '../../lib/current-user';
 import { paths } from '../paths';
 
@@ -9,10 +10,9 @@ export function NotFoundPage() {
   const location = useLocation();
   const user = useCurrentUser();
   return (
-    <div className="fw-page">
+    <Page title="Page not found">
       <NonIdealState
         icon={<MapMarkerIcon size={48} />}
-        title="Page not found"
         description={
           <>
             There is no page at <code className="fw-break">{location.pathname}</code>. The link may be old or mistyped.
@@ -27,6 +27,6 @@ export function NotFoundPage() {
           />
         }
       />
-    </div>
+    </Page>
   );
 }

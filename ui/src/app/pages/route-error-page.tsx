@@ -1,6 +1,7 @@
 import { Button, NonIdealState } from '@blueprintjs/core';
 import { ErrorIcon } from '@blueprintjs/icons';
 import { isRouteErrorResponse, useRouteError } from 'react-router-dom';
+import { Page } from '../../components/page';
 
 /**
  * Last line of defence for errors while loading or rendering a route, most often a page chunk
@@ -14,10 +15,9 @@ export function RouteErrorPage() {
       ? error.message
       : 'Unknown error';
   return (
-    <div className="fw-page">
+    <Page title="This page could not be shown">
       <NonIdealState
         icon={<ErrorIcon size={48} />}
-        title="This page could not be shown"
         description={
           <>
             <p>Reload to try again. If the app was just updated, a reload fetches the new version.</p>
@@ -26,6 +26,6 @@ export function RouteErrorPage() {
         }
         action={<Button size="large" intent="primary" text="Reload" onClick={() => window.location.reload()} />}
       />
-    </div>
+    </Page>
   );
 }

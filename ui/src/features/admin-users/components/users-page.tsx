@@ -28,7 +28,7 @@ function UserRow({
     <tr>
       <td>
         <div className="fw-user-cell">
-          <strong className="fw-break">
+          <strong className="fw-break-word">
             {user.displayName}
             {isSelf && (
               <Tag minimal round className="fw-inline-tag">
@@ -36,7 +36,7 @@ function UserRow({
               </Tag>
             )}
           </strong>
-          <span className="fw-muted fw-break">{user.email}</span>
+          <span className="fw-muted fw-break-word">{user.email}</span>
         </div>
       </td>
       <td className="fw-hide-on-phone">{Number.isNaN(since.getTime()) ? '' : dateFormat.format(since)}</td>
@@ -51,7 +51,7 @@ function UserRow({
           />
           {saving && <Spinner size={16} aria-label="Saving" />}
         </div>
-        {isSelf && <div className="fw-muted fw-small">Another admin can change your own role.</div>}
+        {isSelf && <div className="fw-muted fw-small fw-role-note">Only another admin can change your role.</div>}
       </td>
     </tr>
   );
@@ -103,7 +103,9 @@ export function UsersPage() {
               <th scope="col" className="fw-hide-on-phone">
                 Since
               </th>
-              <th scope="col">Role</th>
+              <th scope="col" className="fw-role-col">
+                Role
+              </th>
             </tr>
           </thead>
           <tbody>

@@ -29,14 +29,14 @@ import { deepFreeze } from './validate.js';
 /** Checks whose chance of finding the fault is below this are left off the plan. */
 export const MIN_FIND_PROBABILITY = 0.005;
 
-/** Rules that need no reported symptom or check result sit in this bucket, which always runs. */
+/** Rules that need no reported symptom, check result or known fact sit in this bucket, which always runs. */
 export const ALWAYS_BUCKET = '*';
 
 export interface CompiledRule {
   def: RuleDefinition;
   /** Position in `ruleset.rules`. */
   position: number;
-  /** Index bucket: `symptom:<id>`, `check:<id>` or `*`. */
+  /** Index bucket: `symptom:<id>`, `check:<id>`, `fact:<id>` (the fact must be known) or `*`. */
   bucket: string;
   /** Symptoms the rule requires (its top-level `all` holds `shows` or `showsOnly` on them). */
   requiresSymptoms: string[];
@@ -69,21 +69,33 @@ function topLevelLeaves(c: Condition): Condition[] {
   return [];
 }
 
+/** Operators that are false whenever the fact is unknown (json-rules-engine semantics). */
+const FALSE_WHEN_UNKNOWN = new Set(['equal', 'in', 'lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive']);
+
+/**
+ * The rule's index bucket: the first thing its top-level `all` cannot do without. A reported
+ * symptom first, then a check result, then a setup or conditions fact that must be known; rules
+ * with none of these always run.
+ */
 function compileRule(def: RuleDefinition, position: number): CompiledRule {
   const leaves = topLevelLeaves(def.conditions);
   const requiresSymptoms: string[] = [];
-  let bucket = ALWAYS_BUCKET;
+  let symptomBucket: string | undefined;
+  let checkBucket: string | undefined;
+  let factBucket: string | undefined;
   for (const leaf of leaves) {
     if (!('fact' in leaf)) continue;
     if (leaf.fact === 'symptoms' && (leaf.operator === 'shows' || leaf.operator === 'showsOnly')) {
       const symptom = (leaf.value as { symptom: string }).symptom;
       requiresSymptoms.push(symptom);
-      if (bucket === ALWAYS_BUCKET) bucket = `symptom:${symptom}`;
-    } else if (leaf.fact === 'checkResults' && leaf.operator === 'resultIs' && bucket === ALWAYS_BUCKET) {
-      bucket = `check:${(leaf.value as { check: string }).check}`;
+      symptomBucket ??= `symptom:${symptom}`;
+    } else if (leaf.fact === 'checkResults' && leaf.operator === 'resultIs') {
+      checkBucket ??= `check:${(leaf.value as { check: string }).check}`;
+    } else if (FALSE_WHEN_UNKNOWN.has(leaf.operator)) {
+      factBucket ??= `fact:${leaf.fact}`;
     }
   }
-  return { def, position, bucket, requiresSymptoms };
+  return { def, position, bucket: symptomBucket ?? checkBucket ?? factBucket ?? ALWAYS_BUCKET, requiresSymptoms };
 }
 
 /** Compiles a validated ruleset once; both evaluators build on this. */
@@ -187,8 +199,10 @@ export function prepare(compiled: CompiledRuleset, input: unknown, options: Rank
   if (!validation.ok || !validation.request) throw new RankRequestError(validation);
   const request = validation.request;
   const now = options.now ?? (request.asOf ? new Date(request.asOf) : new Date());
+  const facts = computeFacts(request, now);
   const buckets = [ALWAYS_BUCKET, ...request.symptoms.map((s) => `symptom:${s.id}`), ...Object.keys(request.results).map((c) => `check:${c}`)];
-  return { request, facts: computeFacts(request, now), buckets: buckets.filter((b) => compiled.buckets.has(b)) };
+  for (const [id, value] of facts) if (value !== undefined) buckets.push(`fact:${id}`);
+  return { request, facts, buckets: buckets.filter((b) => compiled.buckets.has(b)) };
 }
 
 /** Rule positions to evaluate for a prepared request (all rules when `indexed` is false). */

@@ -6,11 +6,12 @@
  * for speed:
  * - facts are computed once per request by pure functions and handed over as constant facts
  *   without cache keys (no hashing, no `path` lookups);
- * - rules are split by an index bucket (the first symptom or check result their top-level `all`
- *   requires), one engine per bucket, and a request runs only the buckets of the symptoms and
- *   check results it reports, plus the bucket of rules that need neither; a rule outside those
- *   buckets cannot fire, so the result is the same as running every rule (the tests check this
- *   against the plain evaluator with the index switched off);
+ * - rules are split by an index bucket (the first symptom, check result, or setup or conditions
+ *   fact their top-level `all` cannot do without), one engine per bucket, and a request runs
+ *   only the buckets of the symptoms and check results it reports and the facts it knows, plus
+ *   the bucket of rules that need none of these; a rule outside those buckets cannot fire, so
+ *   the result is the same as running every rule (the tests check this against the plain
+ *   evaluator with the index switched off);
  * - rules with identical conditions (a symptom's general rules for several causes, say) become
  *   one engine rule whose event lists them all, so their conditions are evaluated once;
  * - the engines share one almanac per request, hold a compact copy of each rule (the event is

@@ -7,6 +7,8 @@ import {
   CARBURETTOR_KINDS,
   IDLE_SCREW_STATES,
   SETUP_RANGES,
+  moistAirDensity,
+  type AirFigures,
   type CheckResultValue,
   type DiagnosisConditions,
   type EngineTemp,
@@ -81,14 +83,28 @@ export function daysSince(isoDate: string | undefined, now: Date): number | unde
 }
 
 /**
+ * An air density in kg/m3 from a day's figures: the density given, else CIPM-2007 moist-air
+ * density from temperature, station pressure and humidity when all three are given.
+ */
+export function densityOf(air: AirFigures | undefined): number | undefined {
+  if (!air) return undefined;
+  if (typeof air.densityKgM3 === 'number') return air.densityKgM3;
+  const { temperatureC, stationPressureHpa, relativeHumidityPct } = air;
+  if (typeof temperatureC === 'number' && typeof stationPressureHpa === 'number' && typeof relativeHumidityPct === 'number') {
+    return moistAirDensity(temperatureC, stationPressureHpa * 100, relativeHumidityPct);
+  }
+  return undefined;
+}
+
+/**
  * Air density change in percent (positive = denser today): the given figure, else computed from
- * today's and the reference day's densities when both are given.
+ * today's and the reference day's air (densities, or temperature, pressure and humidity).
  */
 export function densityChangeOf(conditions: DiagnosisConditions): number | undefined {
   if (typeof conditions.densityChangePct === 'number') return conditions.densityChangePct;
-  const today = conditions.today?.densityKgM3;
-  const then = conditions.reference?.densityKgM3;
-  if (typeof today === 'number' && typeof then === 'number' && then > 0) return densityChange(today, then);
+  const today = densityOf(conditions.today);
+  const then = densityOf(conditions.reference);
+  if (today !== undefined && then !== undefined && then > 0) return densityChange(today, then);
   return undefined;
 }
 

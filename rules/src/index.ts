@@ -28,7 +28,7 @@ export {
   type RankRequestValidation,
 } from './request.js';
 export { MIN_FIND_PROBABILITY, type RankOptions } from './core.js';
-export { FACTS, computeFacts, daysSince, densityChangeOf, type FactDefinition, type NormalisedRankRequest } from './facts.js';
+export { FACTS, computeFacts, daysSince, densityChangeOf, densityOf, type FactDefinition, type NormalisedRankRequest } from './facts.js';
 export { OPERATORS, shows, resultIs } from './operators.js';
 export {
   logSumExp,

@@ -211,6 +211,23 @@ describe('air density', () => {
     expect(factsOf({}, { conditions: { densityChangePct: -2, today: { densityKgM3: 1.225 }, reference: { densityKgM3: 1.18 } } }).get('densityChangePct')).toBe(-2);
   });
 
+  it('the change is worked out from temperature, pressure and humidity when no density is given', () => {
+    // Source: ISA sea level (ICAO Doc 7488): 15 C, 1013.25 hPa, dry air is 1.225 kg/m3; CIPM-2007
+    // moist-air density (as shared/air computes it) agrees to about 0.1 %. Hand-computed ideal gas
+    // for dry air at 30 C, 1013.25 hPa: 101325 * 0.0289652 / (8.314462 * 303.15) = 1.1644 kg/m3.
+    // So today (15 C) is about (1.225 - 1.1644) / 1.1644 = +5.2 % denser than the 30 C day.
+    const change = factsOf({}, {
+      conditions: {
+        today: { temperatureC: 15, stationPressureHpa: 1013.25, relativeHumidityPct: 0 },
+        reference: { temperatureC: 30, stationPressureHpa: 1013.25, relativeHumidityPct: 0 },
+      },
+    }).get('densityChangePct') as number;
+    expect(change).toBeGreaterThan(5.0);
+    expect(change).toBeLessThan(5.4);
+    // Missing humidity on one day: no figure rather than a guess.
+    expect(factsOf({}, { conditions: { today: { temperatureC: 15, stationPressureHpa: 1013.25 }, reference: { densityKgM3: 1.2 } } }).get('densityChangePct')).toBeUndefined();
+  });
+
   it('a lean top end with denser air puts the main jet and the air change first; rich with thinner air, the reverse', async () => {
     // Source: common practice, no published source.
     const lean = await rank({ symptoms: ['lean-top-end'], conditions: { densityChangePct: 5 } });

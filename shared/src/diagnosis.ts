@@ -164,7 +164,9 @@ export interface DiagnosisConditions {
    * Air density today against the day the setup was last right, in percent:
    * `100 * (densityToday - densityThen) / densityThen`. POSITIVE = DENSER air today (colder,
    * higher pressure or drier), which leans the mixture; negative = thinner air, which richens it.
-   * When absent it is computed from `today.densityKgM3` and `reference.densityKgM3` if both are given.
+   * When absent it is computed from `today` and `reference`: each day's `densityKgM3`, or else
+   * its temperature, station pressure and humidity (CIPM-2007 moist-air density); a day missing
+   * any of those leaves the change unknown.
    */
   densityChangePct?: number;
   /** Today's air. */

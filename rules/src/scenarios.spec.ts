@@ -112,6 +112,17 @@ describe('ranking scenarios (common practice, no published source)', () => {
     expect(['slide-sticking-or-misfitted', 'slide-cutaway-wrong']).toContain(res.causes[0].id);
   });
 
+  it('bogs only while the engine is cold: the choke first', async () => {
+    const res = await rank({ symptoms: [{ id: 'bog-on-acceleration', engine: 'cold' }] });
+    expect(ids(res, 1)).toEqual(['choke-not-used-cold']);
+  });
+
+  it('rich low down but lean at the top: two circuits out (air screw or pilot, and main jet), not the air', async () => {
+    const res = await rank({ symptoms: ['lean-top-end', { id: 'rich-blubber', band: 'closed' }], conditions: { densityChangePct: 0.5 } });
+    expect(ids(res, 2).sort()).toEqual(['air-screw-too-far-in', 'main-jet-too-small']);
+    expect(rankOf(res, 'air-density-changed')).toBeGreaterThan(3);
+  });
+
   it('only "inconsistent laps": no cause is confidently singled out', async () => {
     const res = await rank({ symptoms: ['inconsistent-laps'] });
     expect(res.causes[0].probability).toBeLessThan(0.2);

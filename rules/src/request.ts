@@ -17,7 +17,6 @@ import {
   type CheckResultValue,
   type DiagnosisConditions,
   type NumericRange,
-  type RankRequest,
   type SetupSnapshot,
 } from '@fuelwright/shared';
 import type { NormalisedRankRequest, NormalisedSymptom } from './facts.js';
@@ -186,9 +185,4 @@ export function validateRankRequest(input: unknown, catalog: Catalog, lookups?: 
     asOf: body.asOf ?? undefined,
   };
   return { ok: true, unknown, fields, message: 'ok', request };
-}
-
-/** Type guard for callers that build requests in code. */
-export function isRankRequest(value: unknown): value is RankRequest {
-  return rankRequestSchema.safeParse(value).success;
 }

@@ -5,12 +5,20 @@
 export const paths = {
   landing: '/',
   quickDiagnosis: '/diagnose',
+  /** Opens a case on one kart: `?kartId=<id>`. */
+  diagnoseKart: '/diagnose/new',
+  conditions: '/conditions',
   signIn: '/sign-in',
   signUp: '/sign-up',
   home: '/home',
   // racer
   karts: '/karts',
+  jetting: '/jetting',
+  kartJetting: '/karts/:kartId/jetting',
+  kart: '/karts/:kartId',
   cases: '/cases',
+  case: '/cases/:caseId',
+  caseWalkThrough: '/cases/:caseId/walk-through',
   // coach
   sharedCases: '/shared-cases',
   // shop
@@ -46,4 +54,9 @@ export function signInPath(next?: string | null): string {
 export function signUpPath(next?: string | null): string {
   const target = safeNextPath(next);
   return target ? `${paths.signUp}?${NEXT_PARAM}=${encodeURIComponent(target)}` : paths.signUp;
+}
+
+/** The jetting screen of one kart. */
+export function kartJettingPath(kartId: string): string {
+  return paths.kartJetting.replace(':kartId', encodeURIComponent(kartId));
 }

@@ -1,6 +1,8 @@
 import type { ComponentType } from 'react';
 import {
   BookIcon,
+  CloudIcon,
+  FilterIcon,
   ClipboardIcon,
   DiagnosisIcon,
   DriveTimeIcon,
@@ -82,6 +84,19 @@ export const appRoutes: readonly AppRoute[] = [
     menu: { icon: DriveTimeIcon, order: 10 },
   },
   {
+    path: paths.jetting,
+    title: 'Jetting',
+    access: ['racer'],
+    page: () => import('../features/jetting/components/jetting-index-page').then((m) => m.JettingIndexPage),
+    menu: { icon: FilterIcon, order: 15 },
+  },
+  {
+    path: paths.kartJetting,
+    title: 'Jetting',
+    access: 'signed-in',
+    page: () => import('../features/jetting/components/kart-jetting-page').then((m) => m.KartJettingPage),
+  },
+  {
     path: paths.cases,
     title: 'Cases',
     access: ['racer'],
@@ -131,6 +146,13 @@ export const appRoutes: readonly AppRoute[] = [
     comingNext:
       'Versions of the knowledge base (symptoms, causes, checks, cautions and rule weights): publish a new one or roll back.',
     menu: { icon: BookIcon, order: 40 },
+  },
+  {
+    path: paths.conditions,
+    title: 'Conditions',
+    access: 'anyone',
+    page: () => import('../features/conditions/components/conditions-page').then((m) => m.ConditionsPage),
+    menu: { icon: CloudIcon, order: 80 },
   },
   {
     path: paths.quickDiagnosis,

@@ -1,0 +1,168 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { computeAir, suggestJets } from '@fuelwright/shared';
+import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap } from './browser.js';
+
+const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
+
+/** A day before today in the browser's calendar, YYYY-MM-DD. */
+function daysAgo(n: number): string {
+  const d = new Date(Date.now() - n * 24 * 3600 * 1000);
+  const pad = (x: number) => String(x).padStart(2, '0');
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+}
+
+async function signIn(page: Page, baseUrl: string): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.fill('#sign-in-email', RACER.email);
+  await page.fill('#sign-in-password', RACER.password);
+  await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${baseUrl}/home`);
+}
+
+async function logSession(
+  page: Page,
+  s: { day: string; temperature: string; humidity: string; pressure: string; main: string; pilot: string; ran: 'Rich' | 'Right' | 'Lean'; plug: string; lap?: string },
+): Promise<void> {
+  await page.getByRole('button', { name: 'Log a session' }).click();
+  const form = page.getByRole('form', { name: 'Log a session' });
+  await form.locator('#log-date').fill(s.day);
+  await form.locator('#log-track').fill('Club circuit');
+  await form.locator('#log-temperature').fill(s.temperature);
+  await form.locator('#log-humidity').fill(s.humidity);
+  // The form starts from today's air as entered above (elevation and weather report); these were read on a barometer.
+  await form.getByRole('radio', { name: 'Barometer at the track' }).click();
+  await form.locator('#log-station-pressure').fill(s.pressure);
+  await form.locator('#log-main').fill(s.main);
+  await form.locator('#log-pilot').fill(s.pilot);
+  await form.getByRole('radio', { name: s.ran, exact: true }).click();
+  await form.locator('#log-plug').selectOption(s.plug);
+  if (s.lap) await form.locator('#log-lap').fill(s.lap);
+  await form.getByRole('button', { name: 'Log session' }).click();
+  await form.waitFor({ state: 'detached' });
+}
+
+async function enterTodaysWeather(page: Page): Promise<void> {
+  const form = page.getByRole('form', { name: 'Today’s weather' });
+  await form.locator('#today-temperature').fill('39.2'); // °F (the racer switched units): 4 °C
+  await form.locator('#today-humidity').fill('70');
+  await form.getByRole('radio', { name: 'Elevation + weather report' }).click();
+  await form.locator('#today-elevation').fill('394'); // ft: about 120 m
+  await form.locator('#today-sea-level-pressure').fill('30.39'); // inHg: about 1029 hPa
+  await form.getByRole('button', { name: 'Suggest today’s jets' }).click();
+}
+
+describe('jetting in the browser', () => {
+  const baseUrl = inject('baseUrl');
+  let browser: Browser;
+  let kartId: string;
+  beforeAll(async () => {
+    browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('a racer logs two sessions, enters today’s weather and sees the suggestion and the chart (390 px)', async () => {
+    const { context, page } = await newPage(browser, PHONE, 'dark');
+    const outside = recordOutsideRequests(page, baseUrl);
+    await signIn(page, baseUrl);
+    // A fresh kart, so the log starts empty.
+    const created = await page.request.post(`${baseUrl}/api/karts`, {
+      data: { name: 'Browser test kart', displacementCc: 125, drive: 'gearbox', carburettorKind: 'pump-around' },
+    });
+    expect(created.status()).toBe(201);
+    kartId = (await created.json()).id;
+    // Units: °F, inHg, ft (saved to the racer's preferences).
+    expect(
+      (await page.request.put(`${baseUrl}/api/me/preferences`, { data: { units: { temperature: 'F', pressure: 'inHg', length: 'ft' } } })).status(),
+    ).toBe(200);
+
+    await page.goto(`${baseUrl}/karts/${kartId}/jetting`);
+    await page.getByRole('heading', { name: /Jetting: Browser test kart/ }).waitFor();
+    await page.getByText(/Nothing logged yet/).waitFor();
+
+    // Without a session that ran right there is no baseline: the page says so.
+    await enterTodaysWeather(page);
+    await page.getByText('No baseline yet').waitFor();
+
+    // Two sessions (°F, inHg as the racer reads them).
+    await logSession(page, { day: daysAgo(1), temperature: '57.2', humidity: '60', pressure: '29.80', main: '185', pilot: '37.5', ran: 'Right', plug: 'tan', lap: '54.321' });
+    await logSession(page, { day: daysAgo(8), temperature: '78.8', humidity: '40', pressure: '29.53', main: '182.5', pilot: '37.5', ran: 'Right', plug: 'light-tan' });
+    const rows = page.getByRole('table', { name: 'Jetting log' }).locator('tbody tr');
+    await expect.poll(() => rows.count()).toBe(2);
+
+    await enterTodaysWeather(page);
+    const result = page.getByRole('region', { name: 'Today’s suggestion' });
+    await result.waitFor();
+
+    // The number shown is the metering law's answer (Heywood, Internal Combustion Engine Fundamentals, ch. 7,
+    // as suggestJets implements it and shared/src/jetting tests it), from the newest session that ran right.
+    const inHg = 33.86388640341;
+    const baselineAir = computeAir({ temperatureC: (57.2 - 32) / 1.8, stationPressureHpa: 29.8 * inHg, relativeHumidityPct: 60 });
+    const todayAir = computeAir({ temperatureC: (39.2 - 32) / 1.8, altitudeM: 394 * 0.3048, seaLevelPressureHpa: 30.39 * inHg, relativeHumidityPct: 70 });
+    const expected = suggestJets({
+      baseline: { densityKgM3: baselineAir.densityKgM3, dryAirDensityKgM3: baselineAir.dryAirDensityKgM3, mainJet: 185, pilotJet: 37.5 },
+      today: { densityKgM3: todayAir.densityKgM3, dryAirDensityKgM3: todayAir.dryAirDensityKgM3 },
+      scaling: 'diameter',
+      history: [],
+    });
+    expect(await result.getByTestId('suggested-main').textContent()).toBe(String(expected.main.suggested));
+    // Colder, denser air than the baseline day: a richer (bigger) main jet (same source).
+    expect(expected.main.suggested).toBeGreaterThan(185);
+    await result.getByText(`Unrounded ${expected.main.unrounded.toFixed(2)}`, { exact: false }).first().waitFor();
+    // Cautions come first, as callouts with the word "Caution".
+    const firstCallout = result.locator('.fw-caution').first();
+    expect(await firstCallout.textContent()).toMatch(/^Caution.*engine off and cool/);
+    expect(await result.getByText(/^Confidence: (high|medium|low)$/).count()).toBe(1);
+    expect(await result.locator('ol.fw-reasoning li').count()).toBeGreaterThanOrEqual(5);
+
+    // The chart: two sessions, today's star and the suggestion line.
+    const chart = page.locator('.fw-jet-chart');
+    await chart.locator('.recharts-line').waitFor();
+    expect(await chart.locator('.recharts-scatter-symbol').count()).toBe(3);
+    expect(await chart.locator('.recharts-legend-item').allTextContents()).toEqual(
+      expect.arrayContaining(['Same mixture as baseline', 'Ran right', 'Today (suggested)']),
+    );
+    await snap(page, 'jetting-phone');
+    expect(outside).toEqual([]);
+    await context.close();
+  });
+
+  it('shows the same screen at desktop width, and the conditions screen to a visitor', async () => {
+    const { context, page } = await newPage(browser, DESKTOP, 'light');
+    await signIn(page, baseUrl);
+    await page.goto(`${baseUrl}/karts/${kartId}/jetting`);
+    await enterTodaysWeather(page);
+    await page.getByRole('region', { name: 'Today’s suggestion' }).waitFor();
+    await page.locator('.fw-jet-chart .recharts-line').waitFor();
+    await snap(page, 'jetting-desktop');
+    // Back to the demo racer's default units.
+    expect(
+      (await page.request.put(`${baseUrl}/api/me/preferences`, { data: { units: { temperature: 'C', pressure: 'hPa', length: 'm' } } })).status(),
+    ).toBe(200);
+    await context.close();
+
+    for (const [name, viewport] of [
+      ['conditions-phone', PHONE],
+      ['conditions-desktop', DESKTOP],
+    ] as const) {
+      const visitor = await newPage(browser, viewport, 'light');
+      await visitor.page.goto(`${baseUrl}/conditions`);
+      const form = visitor.page.getByRole('form', { name: 'Today’s air' });
+      await form.locator('#conditions-temperature').fill('20');
+      await form.locator('#conditions-humidity').fill('50');
+      await form.locator('#conditions-station-pressure').fill('1013.25');
+      await form.getByRole('button', { name: 'Work out the air' }).click();
+      const figures = visitor.page.getByLabel('Air figures');
+      await figures.waitFor();
+      // CIPM-2007 at 20 °C, 101 325 Pa, 50 % RH: 1.19931 kg/m³ (computed from Picard et al., Metrologia 45 (2008)
+      // 149 in shared/src/air/cipm2007.spec.ts), shown to three decimals.
+      await figures.getByText('1.199 kg/m³', { exact: true }).waitFor();
+      await visitor.page.getByRole('button', { name: 'How this is computed' }).click();
+      await visitor.page.getByText(/CIPM-2007 formula for moist air/).waitFor();
+      await snap(visitor.page, name);
+      await visitor.context.close();
+    }
+  });
+});

@@ -78,10 +78,14 @@ export const appRoutes: readonly AppRoute[] = [
     path: paths.karts,
     title: 'Karts',
     access: ['racer'],
-    page: comingNextPage,
-    comingNext:
-      'Your karts with their engine and carburettor, and a dated setup for each: jets, needle clip, air screw, foam and rebuild dates.',
+    page: () => import('../features/karts/components/karts-page').then((m) => m.KartsPage),
     menu: { icon: DriveTimeIcon, order: 10 },
+  },
+  {
+    path: paths.kart,
+    title: 'Kart',
+    access: 'signed-in',
+    page: () => import('../features/karts/components/kart-page').then((m) => m.KartPage),
   },
   {
     path: paths.jetting,
@@ -100,10 +104,14 @@ export const appRoutes: readonly AppRoute[] = [
     path: paths.cases,
     title: 'Cases',
     access: ['racer'],
-    page: comingNextPage,
-    comingNext:
-      'Running problems you are working through, each with its likely causes, its check plan and the result of every check.',
+    page: () => import('../features/cases/components/cases-page').then((m) => m.CasesPage),
     menu: { icon: FolderOpenIcon, order: 20 },
+  },
+  {
+    path: paths.case,
+    title: 'Case',
+    access: 'signed-in',
+    page: () => import('../features/cases/components/case-page').then((m) => m.CasePage),
   },
   {
     path: paths.sharedCases,

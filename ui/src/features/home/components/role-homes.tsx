@@ -30,12 +30,12 @@ export function RacerHome() {
   return (
     <HomeGrid>
       <QuickDiagnosisCard primary />
-      <HomeCard icon={DriveTimeIcon} title="My karts" to={paths.karts} action="Open karts" comingNext>
-        No karts yet. Adding karts with their engine, carburettor and dated setups comes next.
+      <HomeCard icon={DriveTimeIcon} title="My karts" to={paths.karts} action="Open karts">
+        Your karts with their engine and carburettor, and a dated setup for each: jets, needle clip, air screw, foam
+        and rebuild dates.
       </HomeCard>
-      <HomeCard icon={FolderOpenIcon} title="Open cases" to={paths.cases} action="Open cases" comingNext>
-        No open cases. A case keeps one running problem with its checks and what fixed it; cases come with the
-        guided diagnosis.
+      <HomeCard icon={FolderOpenIcon} title="Cases" to={paths.cases} action="Open cases">
+        Each running problem you worked through: the likely causes, every check with its result, and what fixed it.
       </HomeCard>
     </HomeGrid>
   );

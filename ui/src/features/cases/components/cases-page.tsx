@@ -1,0 +1,266 @@
+import type { ReactNode } from 'react';
+import { Button, Card, FormGroup, HTMLSelect, HTMLTable, NonIdealState, Spinner } from '@blueprintjs/core';
+import { ArrowDownIcon, ArrowUpIcon, DiagnosisIcon, ErrorIcon, FolderOpenIcon, SwapVerticalIcon } from '@blueprintjs/icons';
+import { generatePath, Link, useSearchParams } from 'react-router-dom';
+import { CASE_STATES, CASE_STATE_LABELS, type CaseSummaryDto } from '@fuelwright/shared';
+import { paths } from '../../../app/paths';
+import { LinkButton } from '../../../components/link-button';
+import { Page } from '../../../components/page';
+import { useMediaQuery } from '../../../lib/use-media-query';
+import { useCases } from '../api/get-cases';
+import { useCatalog } from '../api/get-catalog';
+import { useKarts } from '../api/get-karts';
+import {
+  CASE_SORT_KEYS,
+  CASE_SORT_LABELS,
+  firstDirection,
+  isCaseState,
+  nextSort,
+  parseSort,
+  sortCases,
+  type CaseSort,
+  type CaseSortKey,
+} from '../lib/case-list';
+import { catalogLabels, type CatalogLabels } from '../lib/catalog-labels';
+import { formatDateTime } from '../lib/format';
+import { PHONE_QUERY } from '../lib/phone';
+import { CaseStateTag } from './case-state-tag';
+import { ProbabilityBar } from './probability-bar';
+import '../cases.css';
+
+const casePath = (c: CaseSummaryDto) => generatePath(paths.case, { caseId: c.id });
+
+function symptomsText(c: CaseSummaryDto, labels: CatalogLabels): string {
+  if (c.symptomIds.length === 0) return 'No symptoms reported';
+  const first = labels.symptom(c.symptomIds[0]);
+  return c.symptomIds.length === 1 ? first : `${first} + ${c.symptomIds.length - 1} more`;
+}
+
+function TopCause({ c, labels }: { c: CaseSummaryDto; labels: CatalogLabels }) {
+  if (!c.topCauseId) return <span className="fw-muted">None yet</span>;
+  return <span className="fw-break-word">{labels.cause(c.topCauseId)}</span>;
+}
+
+function SortHeader({ sortKey, sort, onSort, className }: { sortKey: CaseSortKey; sort: CaseSort; onSort: (key: CaseSortKey) => void; className?: string }) {
+  const active = sort.key === sortKey;
+  const Icon = !active ? SwapVerticalIcon : sort.dir === 'asc' ? ArrowUpIcon : ArrowDownIcon;
+  return (
+    <th scope="col" className={className} aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : 'none'}>
+      <Button
+        className="fw-sort-button"
+        variant="minimal"
+        alignText="start"
+        endIcon={<Icon className={active ? undefined : 'fw-muted'} />}
+        text={CASE_SORT_LABELS[sortKey]}
+        onClick={() => onSort(sortKey)}
+        aria-label={`Sort by ${CASE_SORT_LABELS[sortKey].toLowerCase()}`}
+      />
+    </th>
+  );
+}
+
+function CaseTable({ cases, labels, sort, onSort }: { cases: CaseSummaryDto[]; labels: CatalogLabels; sort: CaseSort; onSort: (key: CaseSortKey) => void }) {
+  return (
+    <HTMLTable className="fw-data-table fw-cases-table" striped aria-label="Your cases">
+      <thead>
+        <tr>
+          {CASE_SORT_KEYS.map((key) => (
+            <SortHeader key={key} sortKey={key} sort={sort} onSort={onSort} className={key === 'probability' ? 'fw-col-probability' : undefined} />
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {cases.map((c) => (
+          <tr key={c.id} data-case-id={c.id}>
+            <td className="fw-break-word">{c.kartName}</td>
+            <td>
+              <Link className="fw-strong-link" to={casePath(c)}>
+                {symptomsText(c, labels)}
+              </Link>
+            </td>
+            <td className="fw-nowrap">{formatDateTime(c.openedAt)}</td>
+            <td>
+              <TopCause c={c} labels={labels} />
+            </td>
+            <td className="fw-col-probability">
+              {c.topCauseProbability === null ? <span className="fw-muted">—</span> : <ProbabilityBar probability={c.topCauseProbability} label="probability of the top cause" />}
+            </td>
+            <td>
+              <CaseStateTag state={c.state} />
+            </td>
+            <td className="fw-nowrap">{formatDateTime(c.updatedAt)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </HTMLTable>
+  );
+}
+
+function CaseCards({ cases, labels }: { cases: CaseSummaryDto[]; labels: CatalogLabels }) {
+  return (
+    <ul className="fw-card-list" aria-label="Your cases">
+      {cases.map((c) => (
+        <li key={c.id} data-case-id={c.id}>
+          <Card className="fw-case-card">
+            <div className="fw-case-card-head">
+              <span className="fw-muted fw-break-word">{c.kartName}</span>
+              <CaseStateTag state={c.state} />
+            </div>
+            <Link className="fw-strong-link fw-case-card-link" to={casePath(c)}>
+              {symptomsText(c, labels)}
+            </Link>
+            <div className="fw-case-card-cause">
+              <span className="fw-small fw-muted">Top cause</span>
+              <TopCause c={c} labels={labels} />
+              {c.topCauseProbability !== null && <ProbabilityBar probability={c.topCauseProbability} label="probability of the top cause" />}
+            </div>
+            <div className="fw-small fw-muted">
+              Opened {formatDateTime(c.openedAt)} · last change {formatDateTime(c.updatedAt)}
+            </div>
+          </Card>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+function Filter({ id, label, children }: { id: string; label: string; children: ReactNode }) {
+  return (
+    <FormGroup className="fw-filter" label={label} labelFor={id} inline={false}>
+      {children}
+    </FormGroup>
+  );
+}
+
+/** The racer's cases: filter by state and kart, sort by any column (a card list on a phone). */
+export function CasesPage() {
+  const [params, setParams] = useSearchParams();
+  const stateParam = params.get('state');
+  const state = isCaseState(stateParam) ? stateParam : undefined;
+  const kartId = params.get('kartId') ?? undefined;
+  const sort = parseSort(params.get('sort'), params.get('dir'));
+  const cases = useCases({ state, kartId });
+  const catalog = useCatalog();
+  const karts = useKarts();
+  const phone = useMediaQuery(PHONE_QUERY);
+  const labels = catalogLabels(catalog.data);
+
+  const update = (patch: Record<string, string | undefined>) =>
+    setParams(
+      (current) => {
+        const next = new URLSearchParams(current);
+        for (const [key, value] of Object.entries(patch)) {
+          if (value) next.set(key, value);
+          else next.delete(key);
+        }
+        return next;
+      },
+      { replace: true },
+    );
+  const onSort = (key: CaseSortKey) => {
+    const next = nextSort(sort, key);
+    update({ sort: next.key, dir: next.dir });
+  };
+
+  const list = cases.data ? sortCases(cases.data, sort, labels) : [];
+  const filtered = Boolean(state || kartId);
+  const kartOptions = [
+    { value: '', label: 'All karts' },
+    ...(karts.data ?? []).map((kart) => ({ value: kart.id, label: kart.name })),
+  ];
+  // A kart in the address that is not (or no longer) in the list still shows as chosen.
+  if (kartId && karts.isSuccess && !kartOptions.some((o) => o.value === kartId)) kartOptions.push({ value: kartId, label: 'Unknown kart' });
+
+  return (
+    <Page
+      title={
+        <>
+          <FolderOpenIcon size={28} className="fw-title-icon" /> Cases
+        </>
+      }
+      lead="Each running problem you worked through: its likely cause, its checks and how it ended."
+      actions={<LinkButton className="fw-touch" size="large" icon={<DiagnosisIcon />} to={paths.diagnoseKart} text="Open a new case" />}
+    >
+      <div className="fw-filters" role="search" aria-label="Filter cases">
+        <Filter id="cases-state" label="State">
+          <HTMLSelect
+            id="cases-state"
+            large
+            fill
+            value={state ?? ''}
+            onChange={(event) => update({ state: event.currentTarget.value || undefined })}
+            options={[{ value: '', label: 'All states' }, ...CASE_STATES.map((s) => ({ value: s, label: CASE_STATE_LABELS[s] }))]}
+          />
+        </Filter>
+        <Filter id="cases-kart" label="Kart">
+          <HTMLSelect
+            id="cases-kart"
+            large
+            fill
+            value={kartId ?? ''}
+            onChange={(event) => update({ kartId: event.currentTarget.value || undefined })}
+            options={kartOptions}
+          />
+        </Filter>
+        {phone && (
+          <Filter id="cases-sort" label="Sort by">
+            <div className="fw-sort-row">
+              <HTMLSelect
+                id="cases-sort"
+                large
+                fill
+                value={sort.key}
+                onChange={(event) => {
+                  const key = event.currentTarget.value as CaseSortKey;
+                  update({ sort: key, dir: firstDirection(key) });
+                }}
+                options={CASE_SORT_KEYS.map((key) => ({ value: key, label: CASE_SORT_LABELS[key] }))}
+              />
+              <Button
+                className="fw-touch"
+                size="large"
+                icon={sort.dir === 'asc' ? <ArrowUpIcon /> : <ArrowDownIcon />}
+                aria-label={sort.dir === 'asc' ? 'Ascending: press for descending' : 'Descending: press for ascending'}
+                onClick={() => update({ dir: sort.dir === 'asc' ? 'desc' : 'asc' })}
+              />
+            </div>
+          </Filter>
+        )}
+        {filtered && (
+          <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Show all cases" onClick={() => update({ state: undefined, kartId: undefined })} />
+        )}
+      </div>
+
+      {cases.isPending ? (
+        <Spinner aria-label="Loading cases" />
+      ) : cases.isError ? (
+        <NonIdealState
+          icon={<ErrorIcon size={48} />}
+          title="Cases could not be loaded"
+          description={cases.error.message}
+          action={<Button size="large" text="Try again" onClick={() => void cases.refetch()} />}
+        />
+      ) : list.length === 0 ? (
+        <NonIdealState
+          icon={<FolderOpenIcon size={48} />}
+          title={filtered ? 'No cases match' : 'No cases yet'}
+          description={
+            filtered
+              ? 'No case has this state on this kart. Change the filters or show all cases.'
+              : 'A case keeps one running problem: what you noticed, the checks you did and what fixed it. Open one from a kart with “Diagnose this kart”.'
+          }
+          action={!filtered ? <LinkButton className="fw-touch" size="large" intent="primary" to={paths.karts} text="Go to my karts" /> : undefined}
+        />
+      ) : (
+        <>
+          <p className="fw-muted fw-small fw-result-count" aria-live="polite">
+            {list.length === 1 ? '1 case' : `${list.length} cases`}
+            {phone ? `, sorted by ${CASE_SORT_LABELS[sort.key].toLowerCase()}` : ''}
+            {cases.isPlaceholderData ? ' (updating…)' : ''}
+          </p>
+          {phone ? <CaseCards cases={list} labels={labels} /> : <CaseTable cases={list} labels={labels} sort={sort} onSort={onSort} />}
+        </>
+      )}
+    </Page>
+  );
+}

@@ -1,0 +1,20 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { KartDto, KartListResponse } from '@fuelwright/shared';
+import { api } from '../../../lib/api-client';
+
+/** GET /api/karts: the signed-in racer's karts. */
+export async function getKarts(signal?: AbortSignal): Promise<KartDto[]> {
+  const { karts } = await api.get<KartListResponse>('/karts', { signal });
+  return karts;
+}
+
+/** Every kart query starts with this key, so a change to one kart refreshes them all. */
+export const kartsQueryKey = ['karts'] as const;
+
+export function getKartsQueryOptions() {
+  return queryOptions({ queryKey: kartsQueryKey, queryFn: ({ signal }) => getKarts(signal) });
+}
+
+export function useKarts() {
+  return useQuery(getKartsQueryOptions());
+}

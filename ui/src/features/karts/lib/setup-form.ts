@@ -83,7 +83,7 @@ export function setupFormFrom(latest: SetupDto | undefined, today: string): Setu
 /** A number typed with a point or a comma; null when it is not one. */
 export function parseDecimal(raw: string): number | null {
   const t = raw.trim().replace(',', '.');
-  if (!/^[+]?(\d+\.?\d*|\.\d+)$/.test(t)) return null;
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)$/.test(t)) return null;
   return Number(t);
 }
 
@@ -161,7 +161,7 @@ export function validateSetupForm(values: SetupFormValues, today: string): Parse
     const n = field === 'premixRatio' ? parsePremix(raw) : parseDecimal(raw);
     const { min, max } = SETUP_RANGES[field];
     if (n === null) errors[field] = [`Write ${words.what} as a number, for example ${words.example}.`];
-    else if (words.whole && !Number.isInteger(n)) errors[field] = [`Use a whole groove number: ${RANGE_MESSAGES[field](min, max)}`];
+    else if (words.whole && !Number.isInteger(n)) errors[field] = [`Use a whole groove number, counted from the top of the needle: ${min} (top groove) to ${max}.`];
     else if (n < min || n > max) errors[field] = [RANGE_MESSAGES[field](min, max)];
     else input[field] = n;
   };

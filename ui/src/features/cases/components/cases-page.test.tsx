@@ -1,0 +1,159 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { makeUser, meReply, mockApi, renderApp, setPhoneWidth } from '../../../test-utils';
+import { CASE_SUMMARIES, CATALOG, KARTS, OPEN_CASE } from '../test-support/case-fixtures';
+
+const racer = makeUser('racer', { id: 'u', displayName: 'Test racer' });
+
+function api(extra: Record<string, { status: number; body?: unknown }> = {}) {
+  return mockApi({
+    'GET /auth/me': meReply(racer),
+    'GET /catalog': { status: 200, body: CATALOG },
+    'GET /karts': { status: 200, body: { karts: KARTS } },
+    'GET /cases': { status: 200, body: { cases: CASE_SUMMARIES } },
+    'GET /cases?state=open': { status: 200, body: { cases: CASE_SUMMARIES.filter((c) => c.state === 'open') } },
+    'GET /cases?state=open&kartId=k2': { status: 200, body: { cases: [] } },
+    ...extra,
+  });
+}
+
+const rowIds = () => [...document.querySelectorAll('tbody tr')].map((tr) => tr.getAttribute('data-case-id'));
+
+describe('case list', () => {
+  it('shows each case with its kart, labelled top cause, probability and state, and sorts by a column', async () => {
+    setPhoneWidth(false);
+    api();
+    const user = userEvent.setup();
+    renderApp('/cases');
+    const table = await screen.findByRole('table', { name: 'Your cases' });
+    await within(table).findByText('Bowl foam missing, rotten or soaked');
+    // Last change first by default.
+    expect(rowIds()).toEqual(['c-abandoned', 'c-open']);
+    const open = within(table).getByRole('link', { name: 'Bogs when you open the throttle + 1 more' });
+    expect(open).toHaveAttribute('href', '/cases/c-open');
+    expect(within(open.closest('tr')!).getByText('48%')).toBeInTheDocument();
+    expect(within(open.closest('tr')!).getByText('Open')).toBeInTheDocument();
+
+    await user.click(screen.getByRole('button', { name: 'Sort by kart' }));
+    expect(rowIds()).toEqual(['c-open', 'c-abandoned']);
+    expect(screen.getByRole('button', { name: 'Sort by kart' }).closest('th')).toHaveAttribute('aria-sort', 'ascending');
+    await user.click(screen.getByRole('button', { name: 'Sort by kart' }));
+    expect(rowIds()).toEqual(['c-abandoned', 'c-open']);
+    expect(screen.getByRole('button', { name: 'Sort by kart' }).closest('th')).toHaveAttribute('aria-sort', 'descending');
+  });
+
+  it('filters by state and kart on the server and says when nothing matches', async () => {
+    setPhoneWidth(false);
+    const calls = api();
+    const user = userEvent.setup();
+    const { router } = renderApp('/cases');
+    await screen.findByRole('table', { name: 'Your cases' });
+
+    await user.selectOptions(screen.getByLabelText('State'), 'open');
+    await waitFor(() => expect(rowIds()).toEqual(['c-open']));
+    expect(calls.some((c) => c.path === '/cases?state=open')).toBe(true);
+    expect(router.state.location.search).toBe('?state=open');
+
+    await user.selectOptions(screen.getByLabelText('Kart'), 'k2');
+    expect(await screen.findByText('No cases match')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Show all cases' }));
+    await waitFor(() => expect(rowIds()).toEqual(['c-abandoned', 'c-open']));
+  });
+
+  it('shows cards with a sort control on a phone', async () => {
+    setPhoneWidth(true);
+    api();
+    const user = userEvent.setup();
+    renderApp('/cases');
+    const cards = await screen.findByRole('list', { name: 'Your cases' });
+    expect(screen.queryByRole('table')).not.toBeInTheDocument();
+    await within(cards).findByText('Idle screw holds the slide open');
+    await user.selectOptions(screen.getByLabelText('Sort by'), 'probability');
+    const links = within(cards).getAllByRole('link').map((a) => a.getAttribute('href'));
+    expect(links).toEqual(['/cases/c-abandoned', '/cases/c-open']);
+  });
+});
+
+describe('case page', () => {
+  it('shows the symptoms with where they show, the ranking with numbers and reasons, the checks and the timeline', async () => {
+    setPhoneWidth(false);
+    api({ 'GET /cases/c-open': { status: 200, body: OPEN_CASE } });
+    renderApp('/cases/c-open');
+    expect(await screen.findByRole('heading', { name: 'Case on Blue 27' })).toBeInTheDocument();
+
+    const symptoms = screen.getByRole('region', { name: 'Symptoms' });
+    await within(symptoms).findByText('Bogs when you open the throttle');
+    for (const detail of ['1/4 to 3/4 throttle', 'Warm engine', 'Corner exit']) expect(within(symptoms).getByText(detail)).toBeInTheDocument();
+
+    const ranking = screen.getByRole('region', { name: 'Likely causes now' });
+    expect(within(ranking).getByText('91%')).toBeInTheDocument();
+    expect(within(ranking).getByText('The foam was found rotten')).toBeInTheDocument();
+
+    const checks = screen.getByRole('region', { name: 'Checks done' });
+    expect(within(checks).getByText('Look at the bowl foam')).toBeInTheDocument();
+    expect(within(checks).getByText('Fault found')).toBeInTheDocument();
+    expect(within(checks).getByText('“foam crumbles”')).toBeInTheDocument();
+
+    const setup = screen.getByRole('region', { name: 'Setup at the time' });
+    expect(within(setup).getByText('Groove 3 from the top')).toBeInTheDocument();
+    expect(within(setup).getByText('32:1')).toBeInTheDocument();
+    const conditions = screen.getByRole('region', { name: 'Conditions' });
+    expect(within(conditions).getByText(/4.2% denser air/)).toBeInTheDocument();
+
+    const timeline = screen.getByRole('list', { name: 'Timeline' });
+    const events = within(timeline).getAllByRole('listitem').filter((li) => li.hasAttribute('data-event-type'));
+    expect(events.map((e) => e.getAttribute('data-event-type'))).toEqual(['opened', 'check-recorded']);
+    expect(events[1]).toHaveTextContent('“Look at the bowl foam”: Fault found (foam crumbles)');
+    expect(events[1]).toHaveTextContent('Test racer');
+    expect(events[1]).toHaveTextContent('Bowl foam missing, rotten or soaked 91%');
+    expect(screen.getByText(/ruleset version/)).toHaveTextContent('1.0.0');
+
+    expect(screen.getByRole('button', { name: 'Continue the walk-through' })).toHaveAttribute('href', '/cases/c-open/walk-through');
+  });
+
+  it('abandons an open case with a reason', async () => {
+    setPhoneWidth(false);
+    const abandoned = {
+      ...OPEN_CASE,
+      state: 'abandoned',
+      abandonedReason: 'Went away after a clean',
+      events: [
+        ...OPEN_CASE.events,
+        { seq: 3, type: 'abandoned', at: '2026-11-21T08:00:00.000Z', actorId: 'u', actorName: 'Test racer', summary: 'Abandoned: Went away after a clean', payload: {} },
+      ],
+    };
+    let current: unknown = OPEN_CASE;
+    const posted: unknown[] = [];
+    mockApi({
+      'GET /auth/me': meReply(racer),
+      'GET /catalog': { status: 200, body: CATALOG },
+      'GET /cases/c-open': () => ({ status: 200, body: current }),
+      'POST /cases/c-open/abandon': (init) => {
+        posted.push(JSON.parse(String(init.body)));
+        current = abandoned;
+        return { status: 200, body: abandoned };
+      },
+    });
+    const user = userEvent.setup();
+    renderApp('/cases/c-open');
+    await user.click(await screen.findByRole('button', { name: 'Abandon' }));
+    const dialog = await screen.findByRole('dialog');
+    await user.type(within(dialog).getByLabelText('Why (optional)'), 'Went away after a clean');
+    await user.click(within(dialog).getByRole('button', { name: 'Abandon case' }));
+
+    expect(await screen.findByRole('heading', { name: 'Abandoned' })).toBeInTheDocument();
+    expect(posted).toEqual([{ reason: 'Went away after a clean' }]);
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(screen.getByText('Went away after a clean')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Continue the walk-through' })).not.toBeInTheDocument();
+  });
+
+  it('says so when the case is not found', async () => {
+    setPhoneWidth(false);
+    api({ 'GET /cases/nope': { status: 404, body: { statusCode: 404, error: 'Not Found', message: 'Case not found' } } });
+    renderApp('/cases/nope');
+    expect(await screen.findByText('Case not found')).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Back to cases' })).toHaveAttribute('href', '/cases');
+  });
+});

@@ -96,6 +96,7 @@ export const OPEN_CASE: CaseDto = {
   resolution: null,
   stop: null,
   abandonedReason: null,
+  recommendations: [],
   events: [
     {
       seq: 1,
@@ -118,5 +119,5 @@ export const OPEN_CASE: CaseDto = {
       topCauses: [{ id: 'foam-degraded', probability: 0.9111 }],
     },
   ],
-} as CaseDto;
+} as unknown as CaseDto;
 OPEN_CASE.openingRank = OPEN_CASE.rank;

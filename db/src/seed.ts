@@ -43,7 +43,7 @@ export async function seedDemoIfEmpty(
   await db.transaction(async (tx) => {
     const inserted = await tx
       .insert(users)
-      .values(fixture.users.map((u) => ({ email: u.email, displayName: u.displayName, role: u.role, passwordHash })))
+      .values(fixture.users.map((u) => ({ email: u.email, displayName: u.displayName, role: u.role, passwordHash, emailVerifiedAt: new Date() })))
       .returning({ id: users.id, email: users.email });
     const idByEmail = new Map(inserted.map((u) => [u.email, u.id]));
     if (fixture.karts.length === 0) return;

@@ -10,6 +10,8 @@ import { AuthModule } from './auth/auth.module.js';
 import { UsersModule } from './users/users.module.js';
 import { KartsModule } from './karts/karts.module.js';
 import { CasesModule } from './cases/cases.module.js';
+import { SharingModule } from './sharing/sharing.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { DiagnosisModule } from './diagnosis/diagnosis.module.js';
 import { ConditionsModule } from './conditions/conditions.module.js';
 import { JettingModule } from './jetting/jetting.module.js';
@@ -46,6 +48,8 @@ export class AppModule {
         KartsModule,
         DiagnosisModule,
         CasesModule,
+        MailModule,
+        SharingModule,
         ConditionsModule,
         JettingModule,
         PreferencesModule,

@@ -6,6 +6,8 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import { openDatabase, readDemoFixture, type DatabaseHandle } from '@fuelwright/db';
 import { createApp } from '../src/app.factory.js';
 import type { AppConfig } from '../src/config/app.config.js';
+import { MailService } from '../src/mail/mail.service.js';
+import type { CapturedMail } from '../src/mail/mail-capture.server.js';
 
 export interface TestApp {
   app: NestExpressApplication;
@@ -25,7 +27,17 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
   const app = await createApp({
     logger: false,
     database: db,
-    config: { sessionSecret: 'test-secret-that-is-long-enough-0123456789', uiDist: '/nonexistent', seedDemo: false, ...config },
+    config: {
+      sessionSecret: 'test-secret-that-is-long-enough-0123456789',
+      uiDist: '/nonexistent',
+      seedDemo: false,
+      // Tests send the outbox themselves (flushMail) instead of a timer.
+      mailPollMs: 0,
+      mailCapturePort: 0,
+      smtpUrl: undefined,
+      publicUrl: 'http://fuelwright.test',
+      ...config,
+    },
   });
   await app.init();
   return { app, db, http: request(app.getHttpServer()), close: () => app.close() };
@@ -43,4 +55,19 @@ export async function signedIn(t: TestApp, who: ReturnType<typeof demoUser>) {
   const res = await agent.post('/api/auth/sign-in').send(who);
   if (res.status !== 200) throw new Error(`sign-in as ${who.email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
+}
+
+/** Sends what the outbox holds and returns every message the local capture server has received. */
+export async function flushMail(t: TestApp): Promise<CapturedMail[]> {
+  const mail = t.app.get(MailService);
+  await mail.flush();
+  return mail.capture!.received;
+}
+
+/** The token in the first link of a message that matches `path` (e.g. "/invitations/"). */
+export function linkToken(m: CapturedMail, path: string): string {
+  const re = new RegExp(`${path.replace(/[/?]/g, (c) => `\\${c}`)}([A-Za-z0-9_-]+)`);
+  const hit = re.exec(m.text);
+  if (!hit) throw new Error(`no ${path} link in: ${m.text}`);
+  return hit[1];
 }

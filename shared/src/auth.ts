@@ -11,6 +11,7 @@ export interface UserDto {
   email: string;
   displayName: string;
   role: Role;
+  emailVerified: boolean;
   createdAt: string;
 }
 
@@ -19,6 +20,24 @@ export interface SignUpRequest {
   email: string;
   password: string;
   displayName: string;
+  /** The token of an invitation e-mail, when signing up through one. */
+  invitationToken?: string;
+}
+
+/** POST /api/auth/verify-email and the token-only auth forms. */
+export interface TokenRequest {
+  token: string;
+}
+
+/** POST /api/auth/request-password-reset: always answers 202, whether or not the address has an account. */
+export interface PasswordResetRequest {
+  email: string;
+}
+
+/** POST /api/auth/reset-password */
+export interface ResetPasswordRequest {
+  token: string;
+  password: string;
 }
 
 /** POST /api/auth/sign-in (200, sets the session cookie). */

@@ -4,6 +4,7 @@
  */
 import type { CheckResultValue, DiagnosisConditions, RankResponse, StopFinding, SymptomInput, SymptomReport } from './diagnosis.js';
 import type { SetupSnapshot } from './setup.js';
+import type { RecommendationDto } from './sharing.js';
 
 export const CASE_STATES = ['open', 'resolved', 'abandoned', 'stopped'] as const;
 export type CaseState = (typeof CASE_STATES)[number];
@@ -15,7 +16,7 @@ export const CASE_STATE_LABELS: Record<CaseState, string> = {
   stopped: 'Stopped: see an engine builder',
 };
 
-export const CASE_EVENT_TYPES = ['opened', 'symptoms-reported', 'check-recorded', 'resolved', 'abandoned', 'stopped'] as const;
+export const CASE_EVENT_TYPES = ['opened', 'symptoms-reported', 'check-recorded', 'resolved', 'abandoned', 'stopped', 'check-recommended'] as const;
 export type CaseEventType = (typeof CASE_EVENT_TYPES)[number];
 
 export const CASE_NOTE_MAX_LENGTH = 1000;
@@ -113,6 +114,8 @@ export interface CaseDto extends CaseSummaryDto {
   resolution: CaseResolution | null;
   stop: StopFinding | null;
   abandonedReason: string | null;
+  /** Checks recommended by a shared coach or shop (pending ones lead `rank.plan`). */
+  recommendations: RecommendationDto[];
   events: CaseEventDto[];
 }
 

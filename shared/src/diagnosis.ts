@@ -233,6 +233,8 @@ export interface PlanStep {
   causes: string[];
   /** Placed first for safety, ahead of the cost order. */
   safetyFirst: boolean;
+  /** Set on a saved case when a shared coach or shop recommended this check: it is moved to the top. */
+  recommendation?: { by: string; byName: string; reason: string };
 }
 
 export interface StopFinding {

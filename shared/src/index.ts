@@ -8,3 +8,4 @@ export * from './units/index.js';
 export * from './jetting/index.js';
 export * from './cases.js';
 export * from './jetting-log.js';
+export * from './sharing.js';

@@ -4,3 +4,4 @@ export * from './karts.js';
 export * from './setups.js';
 export * from './cases.js';
 export * from './jetting.js';
+export * from './sharing.js';

@@ -12,6 +12,7 @@ export const users = pgTable('users', {
   role: roleEnum('role').notNull().default('racer'),
   /** Display units and other per-user choices (shape owned by the service; empty = defaults). */
   preferences: jsonb('preferences').notNull().default({}),
+  emailVerifiedAt: timestamp('email_verified_at', { withTimezone: true }),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });

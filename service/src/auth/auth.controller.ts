@@ -15,6 +15,8 @@ import { SignInCommand } from './commands/sign-in.command.js';
 import { SignOutCommand } from './commands/sign-out.command.js';
 import { SignUpCommand } from './commands/sign-up.command.js';
 import { toUserDto } from './user-dto.js';
+import { AccountTokensService } from './account-tokens.service.js';
+import { PasswordResetRequestDto, ResetPasswordDto, TokenDto } from './dto/token.dto.js';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -23,6 +25,7 @@ export class AuthController {
 
   constructor(
     private readonly commands: CommandBus,
+    private readonly accountTokens: AccountTokensService,
     config: ConfigService,
   ) {
     this.cookieSecure = config.getOrThrow<AppConfig>('app').cookieSecure;
@@ -44,7 +47,7 @@ export class AuthController {
   @ApiOperation({ summary: 'Create a racer account and sign in' })
   @ApiTooManyRequestsResponse({ description: 'Rate-limited' })
   async signUp(@Body() dto: SignUpDto, @Res({ passthrough: true }) res: Response): Promise<SessionResponse> {
-    const { user, token, expiresAt } = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName));
+    const { user, token, expiresAt } = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName, dto.invitationToken));
     this.setCookie(res, token, expiresAt);
     return { user };
   }
@@ -75,5 +78,33 @@ export class AuthController {
   @ApiOkResponse({ description: 'The signed-in user' })
   me(@CurrentUser() user: SessionUser): SessionResponse {
     return { user: toUserDto(user) };
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('verify-email')
+  @HttpCode(204)
+  @ApiOperation({ summary: 'Confirm an e-mail address with the token from the e-mailed link' })
+  async verifyEmail(@Body() dto: TokenDto): Promise<void> {
+    await this.accountTokens.verifyEmail(dto.token);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('request-password-reset')
+  @HttpCode(202)
+  @ApiOperation({ summary: 'E-mail a reset link (the same answer whether or not the address has an account)' })
+  async requestReset(@Body() dto: PasswordResetRequestDto): Promise<{ message: string }> {
+    await this.accountTokens.requestReset(dto.email);
+    return { message: 'If an account has this address, a reset link is on its way.' };
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('reset-password')
+  @HttpCode(204)
+  @ApiOperation({ summary: 'Set a new password with the token from the e-mailed link; signs out everywhere' })
+  async resetPassword(@Body() dto: ResetPasswordDto): Promise<void> {
+    await this.accountTokens.resetPassword(dto.token, dto.password);
   }
 }

@@ -47,6 +47,7 @@ export class SessionService {
         displayName: users.displayName,
         role: users.role,
         createdAt: users.createdAt,
+        emailVerifiedAt: users.emailVerifiedAt,
       })
       .from(sessions)
       .innerJoin(users, eq(users.id, sessions.userId))

@@ -19,6 +19,7 @@ export interface CaseEventPayloads {
   stopped: { stop: StopFinding };
   resolved: { causeId: string; fix: string; note: string };
   abandoned: { reason: string };
+  'check-recommended': { checkId: string; reason: string };
 }
 
 export type CaseEvent = {
@@ -39,13 +40,15 @@ export interface CaseProjection {
   resolution: CaseResolution | null;
   stop: StopFinding | null;
   abandonedReason: string | null;
+  /** Checks a shared coach or shop recommended, latest per check. */
+  recommendations: { checkId: string; reason: string; by: string; at: string }[];
 }
 
 export class CaseEventError extends Error {}
 
 /** Which events each state accepts. A stopped case can still be resolved (after the engine builder's repair). */
 const ACCEPTS: Record<CaseState, ReadonlySet<CaseEventType>> = {
-  open: new Set(['symptoms-reported', 'check-recorded', 'stopped', 'resolved', 'abandoned']),
+  open: new Set(['symptoms-reported', 'check-recorded', 'stopped', 'resolved', 'abandoned', 'check-recommended']),
   stopped: new Set(['resolved', 'abandoned']),
   resolved: new Set(),
   abandoned: new Set(),
@@ -73,6 +76,7 @@ export function applyEvent(current: CaseProjection | null, event: CaseEvent): Ca
       resolution: null,
       stop: null,
       abandonedReason: null,
+      recommendations: [],
     };
   }
   if (!current) throw new CaseEventError(`"${event.type}" before the case was opened`);
@@ -94,6 +98,11 @@ export function applyEvent(current: CaseProjection | null, event: CaseEvent): Ca
       return { ...current, state: 'resolved', resolution: { ...event.payload, at, by } };
     case 'abandoned':
       return { ...current, state: 'abandoned', abandonedReason: event.payload.reason };
+    case 'check-recommended': {
+      const { checkId, reason } = event.payload;
+      const recommendations = [...(current.recommendations ?? []).filter((r) => r.checkId !== checkId), { checkId, reason, by, at }];
+      return { ...current, recommendations };
+    }
   }
 }
 

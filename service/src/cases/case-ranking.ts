@@ -47,6 +47,10 @@ export class CaseRanking {
     return this.diagnosis.catalog(version).causes.some((c) => c.id === causeId);
   }
 
+  causeLabel(causeId: string, version: string): string | undefined {
+    return this.diagnosis.catalog(version).causes.find((c) => c.id === causeId)?.label;
+  }
+
   checkLabel(checkId: string, version: string): string | undefined {
     return this.diagnosis.catalog(version).checks.find((c) => c.id === checkId)?.label;
   }

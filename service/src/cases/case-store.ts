@@ -1,12 +1,13 @@
 import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import { caseEvents, cases, karts, users, type CaseRow, type Db } from '@fuelwright/db';
-import type { CaseDto, CaseEventDto, CaseSummaryDto } from '@fuelwright/shared';
+import type { CaseDto, CaseEventDto, CaseSummaryDto, RankResponse, RecommendationDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { applyEvent, CaseEventError, replay, type CaseEvent, type CaseProjection } from './case-projection.js';
 import { summarizeEvent } from './case-timeline.js';
 
 export type NewCaseEvent = Omit<CaseEvent, 'at' | 'actorId'>;
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 /** A case row joined with its kart and owner names. */
 export interface LoadedCase {
@@ -53,7 +54,7 @@ export class CaseStore {
   }
 
   /** Appends events to a loaded case; 409 when someone else appended in between. */
-  async append(loaded: LoadedCase, actorId: string, events: NewCaseEvent[]): Promise<void> {
+  async append(loaded: LoadedCase, actorId: string, events: NewCaseEvent[], alsoInTx?: (tx: Tx) => Promise<void>): Promise<void> {
     const now = new Date();
     let projection = loaded.projection;
     const stamped = events.map((e) => ({ ...e, at: now, actorId }) as CaseEvent);
@@ -72,6 +73,8 @@ export class CaseStore {
         .returning({ id: cases.id });
       if (updated.length === 0) throw new ConflictException('The case changed while you were working on it. Reload it and try again.');
       await tx.insert(caseEvents).values(stamped.map((e, i) => ({ caseId: loaded.row.id, seq: rev + i + 1, type: e.type, payload: e.payload, actorId, at: now })));
+      // Whatever must stand or fall with the step (its e-mail notices) is written in the same transaction.
+      if (alsoInTx) await alsoInTx(tx);
     });
   }
 
@@ -129,19 +132,41 @@ export class CaseStore {
     };
   }
 
+  /** Recommendations with names; pending ones (no result yet) lead the plan, marked as coming from the coach or shop. */
+  private async recommendations(p: CaseProjection): Promise<{ list: RecommendationDto[]; rank: RankResponse }> {
+    const recs = p.recommendations ?? [];
+    if (recs.length === 0) return { list: [], rank: p.rank };
+    const ids = [...new Set(recs.map((r) => r.by).filter(Boolean))];
+    const names = new Map(
+      ids.length ? (await this.db.select({ id: users.id, name: users.displayName }).from(users).where(inArray(users.id, ids))).map((u) => [u.id, u.name]) : [],
+    );
+    const done = new Set(p.results.map((r) => r.checkId));
+    const list = recs.map((r) => ({ ...r, byName: names.get(r.by) ?? 'A removed account', pending: !done.has(r.checkId) }));
+    const pending = list.filter((r) => r.pending).reverse(); // newest recommendation first
+    const plan = [...p.rank.plan];
+    const top = [];
+    for (const r of pending) {
+      const i = plan.findIndex((step) => step.checkId === r.checkId);
+      if (i >= 0) top.push({ ...plan.splice(i, 1)[0], recommendation: { by: r.by, byName: r.byName, reason: r.reason } });
+    }
+    return { list, rank: { ...p.rank, plan: [...top, ...plan] } };
+  }
+
   async dto(l: LoadedCase): Promise<CaseDto> {
     const p = l.projection;
+    const recs = await this.recommendations(p);
     return {
       ...this.summary(l),
       symptoms: p.symptoms,
       setup: p.setup,
       conditions: p.conditions,
       results: p.results,
-      rank: p.rank,
+      rank: recs.rank,
       openingRank: p.openingRank,
       resolution: p.resolution,
       stop: p.stop,
       abandonedReason: p.abandonedReason,
+      recommendations: recs.list,
       events: await this.events(l.row.id),
     };
   }

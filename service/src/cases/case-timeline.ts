@@ -16,5 +16,7 @@ export function summarizeEvent(e: CaseEvent): string {
       return `Resolved: ${e.payload.causeId}, fixed by ${e.payload.fix}`;
     case 'abandoned':
       return `Abandoned${e.payload.reason ? `: ${e.payload.reason}` : ''}`;
+    case 'check-recommended':
+      return `Recommended check ${e.payload.checkId}: ${e.payload.reason}`;
   }
 }

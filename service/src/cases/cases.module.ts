@@ -3,6 +3,7 @@ import { DiagnosisModule } from '../diagnosis/diagnosis.module.js';
 import { CasesController } from './cases.controller.js';
 import { CaseRanking } from './case-ranking.js';
 import { CaseStore } from './case-store.js';
+import { CaseAudience } from './case-audience.js';
 import { AbandonCaseHandler } from './commands/abandon-case.handler.js';
 import { OpenCaseHandler } from './commands/open-case.handler.js';
 import { RecordCheckResultHandler } from './commands/record-check-result.handler.js';
@@ -24,7 +25,7 @@ const handlers = [
 @Module({
   imports: [DiagnosisModule],
   controllers: [CasesController],
-  providers: [CaseStore, CaseRanking, ...handlers],
-  exports: [CaseStore],
+  providers: [CaseStore, CaseRanking, CaseAudience, ...handlers],
+  exports: [CaseStore, CaseRanking, CaseAudience],
 })
 export class CasesModule {}

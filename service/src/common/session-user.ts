@@ -7,6 +7,7 @@ export interface SessionUser {
   displayName: string;
   role: Role;
   createdAt: Date;
+  emailVerifiedAt: Date | null;
   sessionId: string;
 }
 

@@ -20,6 +20,15 @@ export interface AppConfig {
   /** Requests per window on the rate-limited routes (sign-in, sign-up, the open rank route). */
   throttleLimit: number;
   throttleTtlMs: number;
+  /** Address of the app as users reach it, for links in e-mails. */
+  publicUrl: string;
+  /** A real SMTP service (smtp:// or smtps:// URL); when absent a local capture server on loopback stands in. */
+  smtpUrl?: string;
+  mailFrom: string;
+  /** Port of the local mail capture server (0 = any free port). */
+  mailCapturePort: number;
+  /** How often the outbox sender looks for due messages (0 = only when asked, as tests do). */
+  mailPollMs: number;
 }
 
 const DEFAULT_UI_DIST = fileURLToPath(new URL('../../../ui/dist', import.meta.url));
@@ -60,6 +69,12 @@ export function loadOrCreateSecret(dataDir: string): string {
   return s;
 }
 
+function smtpUrl(raw: string | undefined): string | undefined {
+  if (!raw) return undefined;
+  if (!/^smtps?:\/\//.test(raw)) throw new ConfigError('SMTP_URL must start with smtp:// or smtps://');
+  return raw;
+}
+
 /** Reads and validates the configuration; a bad value stops start-up with the variable named. */
 export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dataDirRaw = env.DATA_DIR || './data';
@@ -89,6 +104,11 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uiDist: env.UI_DIST ? resolve(env.UI_DIST) : DEFAULT_UI_DIST,
     throttleLimit: int(env, 'THROTTLE_LIMIT', 20, 1, 100_000),
     throttleTtlMs: int(env, 'THROTTLE_TTL_MS', 60_000, 1_000, 3_600_000),
+    publicUrl: (env.PUBLIC_URL || `http://localhost:${int(env, 'PORT', 3000, 0, 65535)}`).replace(/\/+$/, ''),
+    smtpUrl: smtpUrl(env.SMTP_URL),
+    mailFrom: env.MAIL_FROM || 'Fuelwright <no-reply@fuelwright.test>',
+    mailCapturePort: int(env, 'MAIL_CAPTURE_PORT', 0, 0, 65535),
+    mailPollMs: int(env, 'MAIL_POLL_MS', 2000, 0, 3_600_000),
   };
 }
 

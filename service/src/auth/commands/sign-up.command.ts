@@ -6,6 +6,7 @@ export class SignUpCommand extends Command<{ user: UserDto; token: string; expir
     public readonly email: string,
     public readonly password: string,
     public readonly displayName: string,
+    public readonly invitationToken?: string,
   ) {
     super();
   }

@@ -1,35 +1,83 @@
 import { Inject } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { users, type Db } from '@fuelwright/db';
+import { eq } from 'drizzle-orm';
+import { shares, users, type Db } from '@fuelwright/db';
+import type { AppConfig } from '../../config/app.config.js';
 import { DB } from '../../database/database.tokens.js';
 import { FieldsBadRequest } from '../../common/validation.js';
+import { MailService } from '../../mail/mail.service.js';
 import { hashPassword } from '../password.js';
 import { SessionService } from '../session.service.js';
+import { TokenService } from '../token.service.js';
 import { toUserDto } from '../user-dto.js';
 import { SignUpCommand } from './sign-up.command.js';
 
-/** New accounts are racers; an admin changes the role. */
+/**
+ * New accounts are racers and get an e-mail to verify their address. Signing up through an
+ * invitation link proves the address, gives the account the role the inviter named (coach or shop)
+ * and the share, all in one transaction.
+ */
 @CommandHandler(SignUpCommand)
 export class SignUpHandler implements ICommandHandler<SignUpCommand> {
+  private readonly publicUrl: string;
+
   constructor(
     @Inject(DB) private readonly db: Db,
     private readonly sessions: SessionService,
-  ) {}
+    private readonly tokens: TokenService,
+    private readonly mail: MailService,
+    config: ConfigService,
+  ) {
+    this.publicUrl = config.getOrThrow<AppConfig>('app').publicUrl;
+  }
 
   async execute(cmd: SignUpCommand) {
     const email = cmd.email.trim().toLowerCase();
     const passwordHash = await hashPassword(cmd.password);
-    const [row] = await this.db
-      .insert(users)
-      .values({ email, displayName: cmd.displayName.trim(), passwordHash, role: 'racer' })
-      .onConflictDoNothing({ target: users.email })
-      .returning();
-    if (!row) {
-      // Sign-up necessarily tells that an address is taken; sign-in and reset never do.
-      throw new FieldsBadRequest({ email: ['an account with this e-mail already exists: sign in instead'] });
-    }
+    const row = await this.db.transaction(async (tx) => {
+      let invitation: { shareId: string; role: 'coach' | 'shop' } | undefined;
+      if (cmd.invitationToken) {
+        const t = await this.tokens.consume(tx, 'invitation', cmd.invitationToken);
+        if (!t?.shareId) throw new FieldsBadRequest({ invitationToken: ['this invitation link has expired, was already used, or was withdrawn'] });
+        if (t.email !== email) throw new FieldsBadRequest({ email: [`use the address the invitation was sent to (${t.email})`] });
+        const [s] = await tx.select().from(shares).where(eq(shares.id, t.shareId));
+        if (!s || s.revokedAt) throw new FieldsBadRequest({ invitationToken: ['this invitation was withdrawn'] });
+        invitation = { shareId: s.id, role: s.inviteeRole === 'shop' ? 'shop' : 'coach' };
+      }
+      const [inserted] = await tx
+        .insert(users)
+        .values({
+          email,
+          displayName: cmd.displayName.trim(),
+          passwordHash,
+          role: invitation?.role ?? 'racer',
+          emailVerifiedAt: invitation ? new Date() : null,
+        })
+        .onConflictDoNothing({ target: users.email })
+        .returning();
+      if (!inserted) {
+        // Sign-up necessarily tells that an address is taken; sign-in, reset and invitations never do.
+        throw new FieldsBadRequest({ email: ['an account with this e-mail already exists: sign in instead'] });
+      }
+      if (invitation) {
+        await tx.update(shares).set({ granteeId: inserted.id }).where(eq(shares.id, invitation.shareId));
+      } else {
+        const token = await this.tokens.issue(tx, 'email-verification', email, { userId: inserted.id });
+        await this.mail.enqueue(tx, {
+          kind: 'email-verification',
+          toEmail: email,
+          toUserId: inserted.id,
+          content: {
+            subject: 'Confirm your e-mail address for Fuelwright',
+            paragraphs: [`Welcome, ${inserted.displayName}.`, 'Confirm that this address is yours, so coaches and shops can reach you. The link works once and for 3 days.'],
+            action: { label: 'Confirm my address', url: `${this.publicUrl}/verify-email?token=${token}` },
+          },
+        });
+      }
+      return inserted;
+    });
     const { token, expiresAt } = await this.sessions.create(row.id);
     return { user: toUserDto(row), token, expiresAt };
   }
 }
-

@@ -1,6 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { IsEmail, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ApiPropertyOptional } from '@nestjs/swagger';
 import { DISPLAY_NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, type SignUpRequest } from '@fuelwright/shared';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
@@ -24,4 +25,10 @@ export class SignUpDto implements SignUpRequest {
   @MinLength(1, { message: 'displayName must not be empty: the name coaches and shops will see' })
   @MaxLength(DISPLAY_NAME_MAX_LENGTH, { message: `displayName must be at most ${DISPLAY_NAME_MAX_LENGTH} characters` })
   displayName: string;
+
+  @ApiPropertyOptional({ description: 'The token from an invitation e-mail' })
+  @IsOptional()
+  @IsString({ message: 'invitationToken must be the token from the invitation e-mail' })
+  @MaxLength(200, { message: 'invitationToken must be the token from the invitation e-mail' })
+  invitationToken?: string;
 }

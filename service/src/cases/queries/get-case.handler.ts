@@ -12,7 +12,7 @@ export class GetCaseHandler implements IQueryHandler<GetCaseQuery> {
 
   async execute({ user, caseId }: GetCaseQuery) {
     const loaded = await this.store.load(caseId);
-    this.access.require(user, loaded && { ownerId: loaded.row.ownerId }, 'view', 'case');
+    await this.access.requireCase(user, loaded && { ownerId: loaded.row.ownerId }, { caseId, kartId: loaded?.row.kartId ?? '' }, 'view');
     return this.store.dto(loaded!);
   }
 }

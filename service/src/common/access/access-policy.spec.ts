@@ -31,7 +31,7 @@ describe('access policy matrix', () => {
   });
 
   it('answers 404, not 403, when access is refused or the item does not exist', () => {
-    const policy = new AccessPolicy();
+    const policy = new AccessPolicy(undefined as never);
     expect(() => policy.require({ id: STRANGER, role: 'admin' }, resource, 'view', 'kart')).toThrow(NotFoundException);
     expect(() => policy.require({ id: OWNER, role: 'racer' }, undefined, 'view', 'kart')).toThrow('No such kart.');
     expect(policy.require({ id: OWNER, role: 'racer' }, resource, 'edit')).toBe(resource);

@@ -1,5 +1,8 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { and, eq, isNotNull, isNull, or } from 'drizzle-orm';
+import { shares, type Db } from '@fuelwright/db';
 import type { Role } from '@fuelwright/shared';
+import { DB } from '../../database/database.tokens.js';
 
 /** How the user stands to a kart or a case. */
 export type Relation = 'owner' | 'shared' | 'other';
@@ -44,6 +47,48 @@ export function isAllowed(subject: Subject, resource: Resource, action: Action):
 
 @Injectable()
 export class AccessPolicy {
+  constructor(@Inject(DB) private readonly db: Db) {}
+
+  /** Users with an active share of this kart (kart scope). */
+  async granteesOfKart(kartId: string): Promise<string[]> {
+    const rows = await this.db
+      .select({ id: shares.granteeId })
+      .from(shares)
+      .where(and(eq(shares.kartId, kartId), eq(shares.scope, 'kart'), isNull(shares.revokedAt), isNotNull(shares.granteeId)));
+    return rows.map((r) => r.id!);
+  }
+
+  /** Users with an active share of this case, directly or through its kart. */
+  async granteesOfCase(caseId: string, kartId: string): Promise<string[]> {
+    const rows = await this.db
+      .select({ id: shares.granteeId })
+      .from(shares)
+      .where(
+        and(
+          isNull(shares.revokedAt),
+          isNotNull(shares.granteeId),
+          or(and(eq(shares.scope, 'kart'), eq(shares.kartId, kartId)), and(eq(shares.scope, 'case'), eq(shares.caseId, caseId))),
+        ),
+      );
+    return rows.map((r) => r.id!);
+  }
+
+  /** `require` for a kart, reading its shares when the user is not its owner. */
+  async requireKart<T extends { id: string; ownerId: string }>(subject: Subject, kart: T | undefined, action: Action): Promise<T> {
+    if (kart && kart.ownerId !== subject.id) {
+      return this.require(subject, { ...kart, sharedWith: await this.granteesOfKart(kart.id) }, action, 'kart');
+    }
+    return this.require(subject, kart, action, 'kart');
+  }
+
+  /** `require` for a case, reading its shares (and its kart's) when the user is not its owner. */
+  async requireCase<T extends { ownerId: string }>(subject: Subject, item: T | undefined, ids: { caseId: string; kartId: string }, action: Action): Promise<T> {
+    if (item && item.ownerId !== subject.id) {
+      return this.require(subject, { ...item, sharedWith: await this.granteesOfCase(ids.caseId, ids.kartId) }, action, 'case');
+    }
+    return this.require(subject, item, action, 'case');
+  }
+
   /**
    * Returns the resource when the subject may do the action; otherwise 404 (not 403), so that
    * another racer's ids tell nothing.

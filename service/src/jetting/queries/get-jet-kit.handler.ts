@@ -15,7 +15,7 @@ export class GetJetKitHandler implements IQueryHandler<GetJetKitQuery> {
   ) {}
 
   async execute({ user, kartId }: GetJetKitQuery) {
-    this.access.require(user, await findKart(this.db, kartId), 'view', 'kart');
+    await this.access.requireKart(user, await findKart(this.db, kartId), 'view');
     return loadJetKit(this.db, kartId);
   }
 }

@@ -15,7 +15,7 @@ export class ListSessionsHandler implements IQueryHandler<ListSessionsQuery> {
   ) {}
 
   async execute({ user, kartId }: ListSessionsQuery) {
-    this.access.require(user, await findKart(this.db, kartId), 'view', 'kart');
+    await this.access.requireKart(user, await findKart(this.db, kartId), 'view');
     return (await listSessionRows(this.db, kartId)).map(toSessionDto);
   }
 }

@@ -25,7 +25,7 @@ export class SuggestJetsHandler implements IQueryHandler<SuggestJetsQuery> {
   ) {}
 
   async execute({ user, kartId, input }: SuggestJetsQuery): Promise<JetSuggestionResponse> {
-    this.access.require(user, await findKart(this.db, kartId), 'view', 'kart');
+    await this.access.requireKart(user, await findKart(this.db, kartId), 'view');
     const air = computeAirOrBadRequest({
       temperatureC: input.temperatureC,
       relativeHumidityPct: input.relativeHumidityPct,

@@ -14,6 +14,6 @@ export class GetKartHandler implements IQueryHandler<GetKartQuery> {
   ) {}
 
   async execute({ user, kartId }: GetKartQuery) {
-    return toKartDto(this.access.require(user, await findKart(this.db, kartId), 'view', 'kart'));
+    return toKartDto(await this.access.requireKart(user, await findKart(this.db, kartId), 'view'));
   }
 }

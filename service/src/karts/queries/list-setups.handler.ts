@@ -20,7 +20,7 @@ export class ListSetupsHandler implements IQueryHandler<ListSetupsQuery> {
   ) {}
 
   async execute({ user, kartId }: ListSetupsQuery) {
-    this.access.require(user, await findKart(this.db, kartId), 'view', 'kart');
+    await this.access.requireKart(user, await findKart(this.db, kartId), 'view');
     return toSetupDtos(await listSetupRows(this.db, kartId));
   }
 }

@@ -1,0 +1,193 @@
+import { createHmac, timingSafeEqual } from 'node:crypto';
+import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { and, asc, eq, lte, sql } from 'drizzle-orm';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { outbox, users, type Db } from '@fuelwright/db';
+import { NOTICE_KINDS, type NoticeKind, type NoticeSettings } from '@fuelwright/shared';
+import type { AppConfig } from '../config/app.config.js';
+import { DB } from '../database/database.tokens.js';
+import { MailCaptureServer } from './mail-capture.server.js';
+import { renderMail, type MailContent, type MailKind } from './mail-templates.js';
+
+/** Retries after a failed send: 30 s, 1, 2, 4, 8 min ... then the message is marked failed (kept, shown in the outbox). */
+export const MAX_ATTEMPTS = 6;
+const backoffMs = (attempts: number) => 30_000 * 2 ** (attempts - 1);
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+
+export interface QueuedMail {
+  kind: MailKind;
+  toEmail: string;
+  toUserId?: string | null;
+  content: MailContent;
+}
+
+const isNotice = (k: MailKind): k is NoticeKind => (NOTICE_KINDS as readonly string[]).includes(k);
+
+/**
+ * The outbox: messages are written in the same transaction as what causes them, then sent by a
+ * poller with retries, so neither a comment nor its notice is ever lost to a mail outage.
+ */
+@Injectable()
+export class MailService implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly log = new Logger('Mail');
+  private readonly config: AppConfig;
+  private transport?: Transporter;
+  private timer?: NodeJS.Timeout;
+  private running?: Promise<number>;
+  readonly capture?: MailCaptureServer;
+
+  constructor(
+    @Inject(DB) private readonly db: Db,
+    config: ConfigService,
+  ) {
+    this.config = config.getOrThrow<AppConfig>('app');
+    if (!this.config.smtpUrl) this.capture = new MailCaptureServer();
+  }
+
+  async onApplicationBootstrap(): Promise<void> {
+    if (this.capture) {
+      const port = await this.capture.start(this.config.mailCapturePort);
+      this.transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
+    } else {
+      this.transport = nodemailer.createTransport(this.config.smtpUrl);
+    }
+    if (this.config.mailPollMs > 0) {
+      this.timer = setInterval(() => void this.flush().catch((e) => this.log.error(e)), this.config.mailPollMs);
+      this.timer.unref();
+    }
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    await this.running?.catch(() => undefined);
+    this.transport?.close();
+    await this.capture?.stop();
+  }
+
+  /** Signed, per-user, per-kind unsubscribe token (no expiry: the link in an old e-mail keeps working). */
+  unsubscribeToken(userId: string, kind: NoticeKind): string {
+    const body = `${userId}.${kind}`;
+    const mac = createHmac('sha256', this.config.sessionSecret).update(`unsubscribe:${body}`).digest('base64url');
+    return Buffer.from(`${body}.${mac}`).toString('base64url');
+  }
+
+  readUnsubscribeToken(token: string): { userId: string; kind: NoticeKind } | null {
+    let decoded: string;
+    try {
+      decoded = Buffer.from(token, 'base64url').toString('utf8');
+    } catch {
+      return null;
+    }
+    const [userId, kind, mac] = decoded.split('.');
+    if (!userId || !kind || !mac || !isNotice(kind as MailKind)) return null;
+    const expected = createHmac('sha256', this.config.sessionSecret).update(`unsubscribe:${userId}.${kind}`).digest('base64url');
+    const a = Buffer.from(mac);
+    const b = Buffer.from(expected);
+    return a.length === b.length && timingSafeEqual(a, b) ? { userId, kind: kind as NoticeKind } : null;
+  }
+
+  async noticeSettings(userId: string, db: Db | Tx = this.db): Promise<NoticeSettings> {
+    const [row] = await db.select({ p: users.preferences }).from(users).where(eq(users.id, userId));
+    return ((row?.p as { notices?: NoticeSettings } | undefined)?.notices ?? {}) as NoticeSettings;
+  }
+
+  async setNoticeSettings(userId: string, settings: NoticeSettings): Promise<NoticeSettings> {
+    const current = await this.noticeSettings(userId);
+    const merged = { ...current, ...settings };
+    await this.db
+      .update(users)
+      .set({ preferences: sql`${users.preferences} || jsonb_build_object('notices', ${JSON.stringify(merged)}::jsonb)` })
+      .where(eq(users.id, userId));
+    return merged;
+  }
+
+  /**
+   * Queues a message inside the caller's transaction. A notice to a user who turned that kind off
+   * is not queued. Returns whether it was queued.
+   */
+  async enqueue(tx: Db | Tx, mail: QueuedMail): Promise<boolean> {
+    let unsubscribeUrl: string | undefined;
+    if (isNotice(mail.kind) && mail.toUserId) {
+      const settings = await this.noticeSettings(mail.toUserId, tx);
+      if (settings[mail.kind] === false) return false;
+      unsubscribeUrl = `${this.config.publicUrl}/unsubscribe?token=${this.unsubscribeToken(mail.toUserId, mail.kind)}`;
+    }
+    const { subject, text, html } = renderMail(mail.content, unsubscribeUrl);
+    await tx.insert(outbox).values({
+      kind: mail.kind,
+      toEmail: mail.toEmail,
+      toUserId: mail.toUserId ?? null,
+      subject,
+      text,
+      html,
+      unsubscribable: Boolean(unsubscribeUrl),
+    });
+    this.kick();
+    return true;
+  }
+
+  /** Sends soon, without waiting for the next poll. */
+  private kick(): void {
+    if (this.config.mailPollMs > 0) setImmediate(() => void this.flush().catch((e) => this.log.error(e)));
+  }
+
+  /** Sends every due message once; returns how many were sent. Runs one at a time. */
+  flush(): Promise<number> {
+    if (this.running) return this.running.then(() => this.flushNow());
+    return this.flushNow();
+  }
+
+  private flushNow(): Promise<number> {
+    const run = this.sendDue().finally(() => {
+      if (this.running === run) this.running = undefined;
+    });
+    this.running = run;
+    return run;
+  }
+
+  private async sendDue(): Promise<number> {
+    if (!this.transport) return 0;
+    const due = await this.db
+      .select()
+      .from(outbox)
+      .where(and(eq(outbox.status, 'pending'), lte(outbox.nextAttemptAt, new Date())))
+      .orderBy(asc(outbox.createdAt))
+      .limit(50);
+    let sent = 0;
+    for (const m of due) {
+      try {
+        const unsubscribeHeader = m.unsubscribable ? /Stop these e-mails: (\S+)/.exec(m.text)?.[1] : undefined;
+        const info = await this.transport.sendMail({
+          from: this.config.mailFrom,
+          to: m.toEmail,
+          subject: m.subject,
+          text: m.text,
+          html: m.html,
+          headers: { 'X-Fuelwright-Kind': m.kind },
+          list: unsubscribeHeader ? { unsubscribe: unsubscribeHeader } : undefined,
+        });
+        await this.db
+          .update(outbox)
+          .set({ status: 'sent', sentAt: new Date(), attempts: m.attempts + 1, messageId: info.messageId, lastError: null })
+          .where(eq(outbox.id, m.id));
+        sent++;
+      } catch (e) {
+        const attempts = m.attempts + 1;
+        const failed = attempts >= MAX_ATTEMPTS;
+        await this.db
+          .update(outbox)
+          .set({
+            attempts,
+            lastError: e instanceof Error ? e.message : String(e),
+            status: failed ? 'failed' : 'pending',
+            nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+          })
+          .where(eq(outbox.id, m.id));
+        this.log.warn(`Sending "${m.subject}" to ${m.toEmail} failed (attempt ${attempts}${failed ? ', giving up' : ''}): ${e instanceof Error ? e.message : e}`);
+      }
+    }
+    return sent;
+  }
+}

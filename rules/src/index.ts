@@ -57,3 +57,4 @@ export {
   type RulesetSource,
   type Hazard,
 } from './model.js';
+export * from './learning/index.js';

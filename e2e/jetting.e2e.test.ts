@@ -22,7 +22,7 @@ async function signIn(page: Page, baseUrl: string): Promise<void> {
 
 async function logSession(
   page: Page,
-  s: { day: string; temperature: string; humidity: string; pressure: string; main: string; pilot: string; ran: 'Rich' | 'Right' | 'Lean'; plug: string; lap?: string },
+  s: { day: string; temperature: string; humidity: string; pressure: string; main: string; pilot: string; ran: 'Rich' | 'Right' | 'Lean'; plug: string; lap?: string; snapAs?: string },
 ): Promise<void> {
   await page.getByRole('button', { name: 'Log a session' }).click();
   const form = page.getByRole('form', { name: 'Log a session' });
@@ -38,6 +38,7 @@ async function logSession(
   await form.getByRole('radio', { name: s.ran, exact: true }).click();
   await form.locator('#log-plug').selectOption(s.plug);
   if (s.lap) await form.locator('#log-lap').fill(s.lap);
+  if (s.snapAs) await snap(page, s.snapAs);
   await form.getByRole('button', { name: 'Log session' }).click();
   await form.waitFor({ state: 'detached' });
 }
@@ -88,7 +89,7 @@ describe('jetting in the browser', () => {
 
     // Two sessions (°F, inHg as the racer reads them).
     await logSession(page, { day: daysAgo(1), temperature: '57.2', humidity: '60', pressure: '29.80', main: '185', pilot: '37.5', ran: 'Right', plug: 'tan', lap: '54.321' });
-    await logSession(page, { day: daysAgo(8), temperature: '78.8', humidity: '40', pressure: '29.53', main: '182.5', pilot: '37.5', ran: 'Right', plug: 'light-tan' });
+    await logSession(page, { day: daysAgo(8), temperature: '78.8', humidity: '40', pressure: '29.53', main: '182.5', pilot: '37.5', ran: 'Right', plug: 'light-tan', snapAs: 'jetting-log-form-phone' });
     const rows = page.getByRole('table', { name: 'Jetting log' }).locator('tbody tr');
     await expect.poll(() => rows.count()).toBe(2);
 
@@ -121,9 +122,11 @@ describe('jetting in the browser', () => {
     const chart = page.locator('.fw-jet-chart');
     await chart.locator('.recharts-line').waitFor();
     expect(await chart.locator('.recharts-scatter-symbol').count()).toBe(3);
-    expect(await chart.locator('.recharts-legend-item').allTextContents()).toEqual(
-      expect.arrayContaining(['Same mixture as baseline', 'Ran right', 'Today (suggested)']),
-    );
+    expect(await chart.getByRole('list', { name: 'Chart key' }).locator('li').allTextContents()).toEqual([
+      'Same mixture as the baseline',
+      'Ran right',
+      'Today (suggested size)',
+    ]);
     await snap(page, 'jetting-phone');
     expect(outside).toEqual([]);
     await context.close();
@@ -137,6 +140,10 @@ describe('jetting in the browser', () => {
     await page.getByRole('region', { name: 'Today’s suggestion' }).waitFor();
     await page.locator('.fw-jet-chart .recharts-line').waitFor();
     await snap(page, 'jetting-desktop');
+    await page.getByText('Jet kit', { exact: true }).click();
+    await page.getByRole('form', { name: 'Jet kit' }).waitFor();
+    await page.getByRole('form', { name: 'Jet kit' }).scrollIntoViewIfNeeded();
+    await snap(page, 'jetting-kit-desktop');
     // Back to the demo racer's default units.
     expect(
       (await page.request.put(`${baseUrl}/api/me/preferences`, { data: { units: { temperature: 'C', pressure: 'hPa', length: 'm' } } })).status(),
@@ -159,7 +166,7 @@ describe('jetting in the browser', () => {
       // CIPM-2007 at 20 °C, 101 325 Pa, 50 % RH: 1.19931 kg/m³ (computed from Picard et al., Metrologia 45 (2008)
       // 149 in shared/src/air/cipm2007.spec.ts), shown to three decimals.
       await figures.getByText('1.199 kg/m³', { exact: true }).waitFor();
-      await visitor.page.getByRole('button', { name: 'How this is computed' }).click();
+      await visitor.page.getByText('How this is computed', { exact: true }).click();
       await visitor.page.getByText(/CIPM-2007 formula for moist air/).waitFor();
       await snap(visitor.page, name);
       await visitor.context.close();

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { Button, Callout, Card, FormGroup, H2, SegmentedControl } from '@blueprintjs/core';
 import { CalculatorIcon, CloudIcon } from '@blueprintjs/icons';
 import type { AirRequest } from '@fuelwright/shared';
@@ -54,6 +54,11 @@ export function ConditionsPage() {
   };
 
   const air = compute.data;
+  const resultRef = useRef<HTMLElement>(null);
+  // On a phone the figures are below the fold: bring them into view when they arrive.
+  useEffect(() => {
+    if (air) resultRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
+  }, [air]);
   return (
     <Page
       title={
@@ -117,7 +122,7 @@ export function ConditionsPage() {
       </Card>
 
       {air && (
-        <section className="fw-air-result" aria-label="Today’s air">
+        <section ref={resultRef} className="fw-air-result" aria-label="Today’s air">
           <H2 className="fw-section-title">Today’s air</H2>
           {air.warnings.length > 0 && (
             <Callout intent="warning" title="Outside the usual range" className="fw-air-warnings">

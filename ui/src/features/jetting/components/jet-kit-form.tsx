@@ -122,7 +122,7 @@ export function JetKitForm({ kartId, kit, saved, canEdit }: { kartId: string; ki
         intent={errors('scaling').length ? 'danger' : 'none'}
         helperText={
           errors('scaling').join(' ') ||
-          'Most stamped jet numbers follow the hole diameter; some makers number by flow. If unsure, keep diameter: it changes the jet less.'
+          'Some makers number jets by hole diameter, others by flow: check with your jets’ maker. Diameter numbering changes the number less for the same change in air.'
         }
       >
         <SegmentedControl

@@ -1,17 +1,43 @@
 import { useMemo } from 'react';
 import { Colors } from '@blueprintjs/core';
-import { CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from 'recharts';
+import { CartesianGrid, ComposedChart, Line, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatDensity, type JettingSessionDto, type JetSuggestionResponse } from '@fuelwright/shared';
 import { useMediaQuery } from '../../../lib/use-media-query';
-import { densityDomain, jetDomain, sessionPoints, suggestionLine, type JetPoint } from '../lib/chart-data';
+import {
+  DENSITY_TICK_STEPS,
+  JET_TICK_STEPS,
+  densityDomain,
+  jetDomain,
+  niceTicks,
+  sessionPoints,
+  suggestionLine,
+  type JetPoint,
+} from '../lib/chart-data';
 
-const COLOURS = {
-  right: Colors.GREEN3,
-  rich: Colors.ORANGE3,
-  lean: Colors.RED3,
-  today: Colors.BLUE3,
-  line: Colors.BLUE4,
-};
+type Mark = 'circle' | 'triangle' | 'diamond' | 'star' | 'dash';
+
+const SERIES = {
+  right: { name: 'Ran right', colour: Colors.GREEN3, mark: 'circle' },
+  rich: { name: 'Ran rich', colour: Colors.ORANGE3, mark: 'triangle' },
+  lean: { name: 'Ran lean', colour: Colors.RED3, mark: 'diamond' },
+  today: { name: 'Today (suggested size)', colour: Colors.BLUE3, mark: 'star' },
+  line: { name: 'Same mixture as the baseline', colour: Colors.BLUE4, mark: 'dash' },
+} as const satisfies Record<string, { name: string; colour: string; mark: Mark }>;
+
+function Swatch({ mark, colour }: { mark: Mark; colour: string }) {
+  const shapes: Record<Mark, React.JSX.Element> = {
+    circle: <circle cx="8" cy="8" r="5" fill={colour} />,
+    triangle: <polygon points="8,2 14,13 2,13" fill={colour} />,
+    diamond: <polygon points="8,1 15,8 8,15 1,8" fill={colour} />,
+    star: <polygon points="8,1 10,6 15,6 11,9.5 12.5,15 8,11.5 3.5,15 5,9.5 1,6 6,6" fill={colour} />,
+    dash: <line x1="0" y1="8" x2="16" y2="8" stroke={colour} strokeWidth="2" strokeDasharray="4 3" />,
+  };
+  return (
+    <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true">
+      {shapes[mark]}
+    </svg>
+  );
+}
 
 function TooltipBody({ active, payload }: { active?: boolean; payload?: readonly { payload?: JetPoint; name?: string }[] }) {
   const p = active && payload && payload[0]?.payload;
@@ -41,7 +67,7 @@ export function JettingChart({ sessions, suggestion }: { sessions: readonly Jett
     if (suggestion) {
       densities.push(suggestion.air.densityKgM3);
       jets.push(suggestion.suggestion.main.suggested, suggestion.suggestion.main.unrounded);
-      today = [{ density: suggestion.air.densityKgM3, mainJet: suggestion.suggestion.main.suggested, label: 'Today: suggested size' }];
+      today = [{ density: suggestion.air.densityKgM3, mainJet: suggestion.suggestion.main.suggested, label: 'Today' }];
     }
     const xDomain = densityDomain(densities);
     const line = suggestion ? suggestionLine(suggestion.baseline, suggestion.jetKit.scaling, xDomain) : [];
@@ -49,18 +75,36 @@ export function JettingChart({ sessions, suggestion }: { sessions: readonly Jett
     return { groups, today, line, xDomain, yDomain };
   }, [sessions, suggestion]);
 
+  const xTicks = niceTicks(data.xDomain, DENSITY_TICK_STEPS, phone ? 4 : 8);
+  const yTicks = niceTicks(data.yDomain, JET_TICK_STEPS, phone ? 6 : 8);
+  const legend = [
+    data.line.length > 0 && SERIES.line,
+    data.groups.right.length > 0 && SERIES.right,
+    data.groups.rich.length > 0 && SERIES.rich,
+    data.groups.lean.length > 0 && SERIES.lean,
+    data.today.length > 0 && SERIES.today,
+  ].filter((s): s is (typeof SERIES)[keyof typeof SERIES] => Boolean(s));
+
   return (
     <figure className="fw-jet-chart">
+      <ul className="fw-chart-legend" aria-label="Chart key">
+        {legend.map((s) => (
+          <li key={s.name}>
+            <Swatch mark={s.mark} colour={s.colour} />
+            {s.name}
+          </li>
+        ))}
+      </ul>
       <div className="fw-jet-chart-plot">
-        <ResponsiveContainer width="100%" height={phone ? 300 : 360}>
-          <ComposedChart margin={{ top: 8, right: 12, bottom: 24, left: phone ? -8 : 4 }}>
+        <ResponsiveContainer width="100%" height={phone ? 280 : 340}>
+          <ComposedChart margin={{ top: 8, right: 16, bottom: 24, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="var(--fw-chart-grid)" />
             <XAxis
               type="number"
               dataKey="density"
               domain={data.xDomain}
-              tickCount={phone ? 4 : 6}
-              tickFormatter={(v: number) => v.toFixed(3)}
+              ticks={xTicks}
+              tickFormatter={(v: number) => v.toFixed(phone ? 2 : 3)}
               label={{ value: 'Air density (kg/m³)', position: 'insideBottom', offset: -16 }}
               allowDuplicatedCategory={false}
             />
@@ -68,39 +112,45 @@ export function JettingChart({ sessions, suggestion }: { sessions: readonly Jett
               type="number"
               dataKey="mainJet"
               domain={data.yDomain}
-              width={phone ? 48 : 56}
+              ticks={yTicks}
+              width={52}
               tickFormatter={(v: number) => String(Number(v.toFixed(1)))}
-              label={phone ? undefined : { value: 'Main jet', angle: -90, position: 'insideLeft', offset: 12 }}
             />
             <Tooltip content={<TooltipBody />} cursor={{ strokeDasharray: '3 3' }} />
-            <Legend verticalAlign="top" height={phone ? 48 : 32} iconSize={phone ? 12 : 14} />
             {data.line.length > 0 && (
               <Line
                 data={data.line}
                 dataKey="mainJet"
-                name="Same mixture as baseline"
-                stroke={COLOURS.line}
+                name={SERIES.line.name}
+                stroke={SERIES.line.colour}
                 strokeWidth={2}
                 strokeDasharray="6 4"
                 dot={false}
                 activeDot={false}
                 isAnimationActive={false}
-                legendType="plainline"
               />
             )}
-            <Scatter data={data.groups.right} dataKey="mainJet" name="Ran right" fill={COLOURS.right} shape="circle" isAnimationActive={false} />
-            <Scatter data={data.groups.rich} dataKey="mainJet" name="Ran rich" fill={COLOURS.rich} shape="triangle" isAnimationActive={false} />
-            <Scatter data={data.groups.lean} dataKey="mainJet" name="Ran lean" fill={COLOURS.lean} shape="diamond" isAnimationActive={false} />
+            {(['right', 'rich', 'lean'] as const).map((ran) => (
+              <Scatter
+                key={ran}
+                data={data.groups[ran]}
+                dataKey="mainJet"
+                name={SERIES[ran].name}
+                fill={SERIES[ran].colour}
+                shape={SERIES[ran].mark as 'circle' | 'triangle' | 'diamond'}
+                isAnimationActive={false}
+              />
+            ))}
             {data.today.length > 0 && (
-              <Scatter data={data.today} dataKey="mainJet" name="Today (suggested)" fill={COLOURS.today} shape="star" isAnimationActive={false} />
+              <Scatter data={data.today} dataKey="mainJet" name={SERIES.today.name} fill={SERIES.today.colour} shape="star" isAnimationActive={false} />
             )}
           </ComposedChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="fw-muted fw-small">
-        Each point is a logged session: the main jet it ran and the air density that day.
+        Main jet (up) against air density (across). Each point is a logged session.
         {suggestion
-          ? ' The star is today’s suggested size; the dashed line shows the jet that keeps the baseline session’s mixture at each density (humidity not counted on the line).'
+          ? ' The star is today’s suggested size; the dashed line is the jet that keeps the baseline session’s mixture at each density (the line counts moist-air density only; the suggestion also counts humidity).'
           : ' Enter today’s air above to see today’s point and the suggestion line.'}
       </figcaption>
     </figure>

@@ -49,7 +49,9 @@ export function SessionLogTable({
               <th scope="col" className="fw-hide-on-phone">
                 Air
               </th>
-              <th scope="col">Density</th>
+              <th scope="col">
+                Density <span className="fw-muted fw-small fw-nowrap">kg/m³</span>
+              </th>
               <th scope="col">Jets</th>
               <th scope="col" className="fw-hide-on-phone">
                 Plug
@@ -76,14 +78,14 @@ export function SessionLogTable({
                   {formatTemperature(s.temperatureC, units.temperature)}, {formatPressure(s.stationPressureHpa, units.pressure)},{' '}
                   {Math.round(s.relativeHumidityPct)} %
                 </td>
-                <td className="fw-nowrap">{formatDensity(s.densityKgM3)}</td>
+                <td className="fw-nowrap">{formatDensity(s.densityKgM3, { withUnit: false })}</td>
                 <td>
                   <div className="fw-nowrap">Main {s.mainJet}</div>
                   {s.pilotJet !== null && <div className="fw-muted fw-small fw-nowrap">Pilot {s.pilotJet}</div>}
                 </td>
                 <td className="fw-hide-on-phone">{s.plugColour ? PLUG_COLOUR_LABELS[s.plugColour] : ''}</td>
                 <td>
-                  <Tag intent={RAN_INTENT[s.ran]} size="large" minimal>
+                  <Tag intent={RAN_INTENT[s.ran]} minimal>
                     {RAN_TEXT[s.ran]}
                   </Tag>
                 </td>

@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { Card, H3, Tag, type Intent } from '@blueprintjs/core';
 import {
   formatDensity,
@@ -37,13 +38,20 @@ function JetCard({ name, choice }: { name: string; choice: JetChoice }) {
 /** Today's suggestion: cautions first, then the jets, the confidence, today's air and the reasoning. */
 export function SuggestionResult({ result, units }: { result: JetSuggestionResponse; units: UnitPreferences }) {
   const { suggestion, air, baseline } = result;
+  const ref = useRef<HTMLElement>(null);
+  // On a phone the answer is below the fold: bring its cautions into view.
+  useEffect(() => {
+    ref.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
+  }, [result]);
   const range = suggestion.loggedRange;
+  // The power correction factor is not shown here, so neither are its range notes.
+  const airWarnings = air.warnings.filter((w) => !w.startsWith('Power correction factor'));
   const rangeText =
     range.position === 'inside'
       ? `Inside your ${range.days} logged day${range.days === 1 ? '' : 's'} that ran right`
       : `${formatPercent(range.outsideByPct)} ${range.position} than any of your ${range.days} logged day${range.days === 1 ? '' : 's'} that ran right`;
   return (
-    <section className="fw-suggestion" aria-label="Today’s suggestion">
+    <section ref={ref} className="fw-suggestion" aria-label="Today’s suggestion">
       {suggestion.cautions.map((c) => (
         <CautionCallout key={c.code} kind={c.severity}>
           {c.text}
@@ -78,9 +86,7 @@ export function SuggestionResult({ result, units }: { result: JetSuggestionRespo
         {baseline.track ? ` at ${baseline.track}` : ''}, main {jet(baseline.mainJet)}
         {baseline.pilotJet !== null ? `, pilot ${jet(baseline.pilotJet)}` : ''}, {formatDensity(baseline.densityKgM3)}.
       </p>
-      {air.warnings.length > 0 && (
-        <p className="fw-muted fw-small">Air figures: {air.warnings.join(' ')}</p>
-      )}
+      {airWarnings.length > 0 && <p className="fw-muted fw-small">About today’s air: {airWarnings.join(' ')}</p>}
       <H3 className="fw-subsection-title">Why</H3>
       <ol className="fw-reasoning">
         {suggestion.reasoning.map((r) => (

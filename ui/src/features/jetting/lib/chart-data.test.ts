@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { JettingSessionDto } from '@fuelwright/shared';
-import { densityDomain, jetDomain, sessionPoints, suggestionLine } from './chart-data';
+import { DENSITY_TICK_STEPS, JET_TICK_STEPS, densityDomain, jetDomain, niceTicks, sessionPoints, suggestionLine } from './chart-data';
 
 const session = (over: Partial<JettingSessionDto>): JettingSessionDto => ({
   id: 'x',
@@ -56,5 +56,12 @@ describe('jetting chart data', () => {
     expect(jetDomain([182.5, 187.5])).toEqual([180, 190]);
     expect(jetDomain([181, 186])).toEqual([177.5, 190]);
     expect(densityDomain([])).toEqual([1.1, 1.3]);
+  });
+
+  it('puts axis ticks on round values, no more than asked for', () => {
+    expect(niceTicks([177.5, 192.5], JET_TICK_STEPS, 7)).toEqual([177.5, 180, 182.5, 185, 187.5, 190, 192.5]);
+    expect(niceTicks([177.5, 192.5], JET_TICK_STEPS, 4)).toEqual([180, 185, 190]);
+    expect(niceTicks([1.14, 1.295], DENSITY_TICK_STEPS, 6)).toEqual([1.15, 1.2, 1.25]);
+    expect(niceTicks([1.14, 1.295], DENSITY_TICK_STEPS, 9)).toEqual([1.14, 1.16, 1.18, 1.2, 1.22, 1.24, 1.26, 1.28]);
   });
 });

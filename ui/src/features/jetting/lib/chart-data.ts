@@ -56,3 +56,14 @@ export function suggestionLine(
   }
   return points;
 }
+
+/** Round tick values from `from` to `to`: the smallest of `steps` that gives at most `maxTicks` ticks. */
+export function niceTicks([from, to]: [number, number], steps: readonly number[], maxTicks: number): number[] {
+  const step = steps.find((s) => Math.floor(to / s) - Math.ceil(from / s) + 1 <= maxTicks) ?? steps[steps.length - 1];
+  const out: number[] = [];
+  for (let k = Math.ceil(from / step - 1e-9); k * step <= to + 1e-9; k++) out.push(Math.round(k * step * 1e6) / 1e6);
+  return out;
+}
+
+export const DENSITY_TICK_STEPS = [0.005, 0.01, 0.02, 0.05, 0.1] as const;
+export const JET_TICK_STEPS = [1, 2.5, 5, 10, 20, 25, 50] as const;

@@ -107,7 +107,9 @@ function CauseItem({ cause, labels }: { cause: RankedCause; labels: CatalogLabel
             </li>
           ))}
           {cause.reasons.length > shown.length && (
-            <li className="fw-muted">and {cause.reasons.length - shown.length} smaller reasons</li>
+            <li className="fw-muted">
+              and {cause.reasons.length - shown.length} smaller {cause.reasons.length - shown.length === 1 ? 'reason' : 'reasons'}
+            </li>
           )}
         </ul>
       )}
@@ -277,11 +279,11 @@ export function CasePage() {
 
       <div className="fw-case-grid">
         <div className="fw-case-column">
-          <Panel id="case-ranking" title={open ? 'Likely causes now' : 'Likely causes at the end'}>
+          <Panel id="case-ranking" className="fw-order-2" title={open ? 'Likely causes now' : 'Likely causes at the end'}>
             <p className="fw-muted fw-small fw-panel-lead">Probability of each cause after every step so far, with the reasons behind it.</p>
             <Ranking c={c} labels={labels} />
           </Panel>
-          <Panel id="case-checks" title="Checks done">
+          <Panel id="case-checks" className="fw-order-3" title="Checks done">
             {c.results.length === 0 ? (
               <p className="fw-muted">No checks recorded yet.</p>
             ) : (
@@ -303,12 +305,12 @@ export function CasePage() {
               </ol>
             )}
           </Panel>
-          <Panel id="case-timeline" title="Timeline">
+          <Panel id="case-timeline" className="fw-order-4" title="Timeline">
             <CaseTimeline events={c.events} labels={labels} />
           </Panel>
         </div>
         <div className="fw-case-column">
-          <Panel id="case-symptoms" title="Symptoms">
+          <Panel id="case-symptoms" className="fw-order-1" title="Symptoms">
             <ul className="fw-symptoms">
               {c.symptoms.map((symptom) => (
                 <SymptomItem key={symptom.id} symptom={symptom} labels={labels} />
@@ -316,10 +318,10 @@ export function CasePage() {
             </ul>
             {c.symptoms.length === 0 && <p className="fw-muted">No symptoms reported.</p>}
           </Panel>
-          <Panel id="case-setup" title="Setup at the time">
+          <Panel id="case-setup" className="fw-order-5" title="Setup at the time">
             <SetupAtTheTime c={c} />
           </Panel>
-          <Panel id="case-conditions" title="Conditions">
+          <Panel id="case-conditions" className="fw-order-6" title="Conditions">
             {conditions.length === 0 ? (
               <p className="fw-muted">No weather or fuel details were given.</p>
             ) : (
@@ -333,7 +335,7 @@ export function CasePage() {
               </dl>
             )}
           </Panel>
-          <p className="fw-small fw-muted">
+          <p className="fw-small fw-muted fw-order-7">
             Ranked with ruleset version <strong>{c.rulesetVersion}</strong>. Causes ruled out for this carburettor:{' '}
             {c.rank.excluded.length === 0 ? 'none' : c.rank.excluded.map((e) => labels.cause(e.id)).join(', ')}.
           </p>

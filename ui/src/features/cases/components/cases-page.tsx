@@ -124,9 +124,9 @@ function CaseCards({ cases, labels }: { cases: CaseSummaryDto[]; labels: Catalog
   );
 }
 
-function Filter({ id, label, children }: { id: string; label: string; children: ReactNode }) {
+function Filter({ id, label, children, className }: { id: string; label: string; children: ReactNode; className?: string }) {
   return (
-    <FormGroup className="fw-filter" label={label} labelFor={id} inline={false}>
+    <FormGroup className={className ? `fw-filter ${className}` : 'fw-filter'} label={label} labelFor={id} inline={false}>
       {children}
     </FormGroup>
   );
@@ -203,7 +203,7 @@ export function CasesPage() {
           />
         </Filter>
         {phone && (
-          <Filter id="cases-sort" label="Sort by">
+          <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
             <div className="fw-sort-row">
               <HTMLSelect
                 id="cases-sort"

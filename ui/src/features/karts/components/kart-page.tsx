@@ -240,9 +240,7 @@ export function KartPage() {
             description={setups.error.message}
             action={<Button size="large" text="Try again" onClick={() => void setups.refetch()} />}
           />
-        ) : list.length === 0 ? (
-          <p className="fw-muted">No setups recorded yet. A dated setup lets the diagnosis use your jets, clip and screws.</p>
-        ) : (
+        ) : list.length === 0 ? null : (
           <>
             <p className="fw-muted fw-section-lead">Newest first. What changed against the setup before is highlighted.</p>
             {phone ? <SetupCards setups={list} /> : <SetupsTable setups={list} />}

@@ -151,7 +151,10 @@ export function SetupForm({
       {latest ? (
         <p className="fw-muted fw-form-lead">Filled in from your latest setup: change what is different today.</p>
       ) : (
-        <p className="fw-muted fw-form-lead">Fill in what you know; leave the rest empty.</p>
+        <p className="fw-muted fw-form-lead">
+          No setup recorded yet. A dated setup lets the diagnosis use your jets, clip and screws: fill in what you know and
+          leave the rest empty.
+        </p>
       )}
 
       <FieldGroup title="When">

@@ -33,7 +33,7 @@ function ChangeSummary({ setup, previous }: { setup: SetupDto; previous: SetupDt
 export function SetupsTable({ setups }: { setups: SetupDto[] }) {
   return (
     <div className="fw-table-scroll" tabIndex={0} role="region" aria-label="Past setups (scrolls sideways)">
-      <HTMLTable className="fw-data-table fw-setups-table" compact striped>
+      <HTMLTable className="fw-data-table fw-setups-table" compact>
         <thead>
           <tr>
             <th scope="col">Date taken</th>

@@ -11,6 +11,7 @@ import { UsersModule } from './users/users.module.js';
 import { KartsModule } from './karts/karts.module.js';
 import { CasesModule } from './cases/cases.module.js';
 import { SharingModule } from './sharing/sharing.module.js';
+import { PhotosModule } from './photos/photos.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { DiagnosisModule } from './diagnosis/diagnosis.module.js';
 import { ConditionsModule } from './conditions/conditions.module.js';
@@ -50,6 +51,7 @@ export class AppModule {
         CasesModule,
         MailModule,
         SharingModule,
+        PhotosModule,
         ConditionsModule,
         JettingModule,
         PreferencesModule,

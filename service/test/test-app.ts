@@ -1,5 +1,7 @@
 import 'reflect-metadata';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { inject } from 'vitest';
 import request from 'supertest';
 import type { NestExpressApplication } from '@nestjs/platform-express';
@@ -24,6 +26,7 @@ export async function cloneTemplateDatabase(): Promise<DatabaseHandle> {
 
 export async function createTestApp(config: Partial<AppConfig> = {}): Promise<TestApp> {
   const db = await cloneTemplateDatabase();
+  const objectsDir = mkdtempSync(join(tmpdir(), 'fw-objects-'));
   const app = await createApp({
     logger: false,
     database: db,
@@ -36,11 +39,21 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
       mailCapturePort: 0,
       smtpUrl: undefined,
       publicUrl: 'http://fuelwright.test',
+      s3Endpoint: undefined,
+      objectsDir,
       ...config,
     },
   });
   await app.init();
-  return { app, db, http: request(app.getHttpServer()), close: () => app.close() };
+  return {
+    app,
+    db,
+    http: request(app.getHttpServer()),
+    close: async () => {
+      await app.close();
+      rmSync(objectsDir, { recursive: true, force: true });
+    },
+  };
 }
 
 export const DEMO = readDemoFixture();

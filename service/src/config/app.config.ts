@@ -29,6 +29,14 @@ export interface AppConfig {
   mailCapturePort: number;
   /** How often the outbox sender looks for due messages (0 = only when asked, as tests do). */
   mailPollMs: number;
+  /** Object storage for photos: an S3-compatible endpoint; when absent a local fake on loopback stands in. */
+  s3Endpoint?: string;
+  s3Region: string;
+  s3Bucket: string;
+  s3AccessKeyId: string;
+  s3SecretAccessKey: string;
+  /** Folder of the local object-storage fake (default: <dataDir>/objects). */
+  objectsDir: string;
 }
 
 const DEFAULT_UI_DIST = fileURLToPath(new URL('../../../ui/dist', import.meta.url));
@@ -109,6 +117,12 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     mailFrom: env.MAIL_FROM || 'Fuelwright <no-reply@fuelwright.test>',
     mailCapturePort: int(env, 'MAIL_CAPTURE_PORT', 0, 0, 65535),
     mailPollMs: int(env, 'MAIL_POLL_MS', 2000, 0, 3_600_000),
+    s3Endpoint: env.S3_ENDPOINT || undefined,
+    s3Region: env.S3_REGION || 'us-east-1',
+    s3Bucket: env.S3_BUCKET || 'fuelwright-photos',
+    s3AccessKeyId: env.S3_ACCESS_KEY_ID || 'S3RVER',
+    s3SecretAccessKey: env.S3_SECRET_ACCESS_KEY || 'S3RVER',
+    objectsDir: env.OBJECTS_DIR ? resolve(env.OBJECTS_DIR) : join(dataDir, 'objects'),
   };
 }
 

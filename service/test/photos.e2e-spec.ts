@@ -1,0 +1,97 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
+import { photos } from '@fuelwright/db';
+import type { CaseDto } from '@fuelwright/shared';
+import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+
+type Agent = Awaited<ReturnType<typeof signedIn>>;
+
+/** A small JPEG carrying a camera tag and a GPS position, as phone photos do. */
+async function jpegWithLocation(): Promise<Buffer> {
+  return sharp({ create: { width: 120, height: 80, channels: 3, background: '#b07030' } })
+    .jpeg()
+    .withExif({
+      IFD0: { Make: 'PhoneCam', Software: 'camera app' },
+      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' },
+    })
+    .toBuffer();
+}
+
+describe('photos of a case', () => {
+  let t: TestApp;
+  let racer: Agent;
+  let coach: Agent;
+  let c: CaseDto;
+  beforeAll(async () => {
+    t = await createTestApp();
+    racer = await signedIn(t, demoUser('racer'));
+    coach = await signedIn(t, demoUser('coach'));
+    const kartId = (await racer.get('/api/karts')).body.karts[0].id;
+    c = (await racer.post('/api/cases').send({ kartId, symptoms: ['bog-on-acceleration'] })).body;
+  });
+  afterAll(() => t.close());
+
+  it('stores an upload without its location and camera tags, with a thumbnail', async () => {
+    const original = await jpegWithLocation();
+    expect((await sharp(original).metadata()).exif).toBeDefined();
+    const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', original, { filename: 'foam.jpg', contentType: 'image/jpeg' }).field('caption', 'Foam, out of the bowl');
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ contentType: 'image/jpeg', width: 120, height: 80, caption: 'Foam, out of the bowl', uploaderName: 'Tamsin Vell' });
+    const stored = await racer.get(res.body.url).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (d: Buffer) => chunks.push(d));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(stored.status).toBe(200);
+    expect(stored.headers['content-type']).toMatch(/image\/jpeg/);
+    const meta = await sharp(stored.body as Buffer).metadata();
+    expect(meta.exif).toBeUndefined();
+    expect(meta.xmp).toBeUndefined();
+    expect((stored.body as Buffer).includes(Buffer.from('PhoneCam'))).toBe(false);
+    const thumb = await racer.get(res.body.thumbUrl);
+    expect(thumb.status).toBe(200);
+    expect(thumb.headers['content-type']).toMatch(/image\/webp/);
+  });
+
+  it('refuses a file whose content is not a picture, whatever its name says, storing nothing', async () => {
+    const before = (await t.db.db.select().from(photos)).length;
+    const fake = await racer.post(`/api/cases/${c.id}/photos`).attach('file', Buffer.from('#!/bin/sh\necho not a photo\n'), { filename: 'photo.jpg', contentType: 'image/jpeg' });
+    expect(fake.status).toBe(415);
+    expect(fake.body.fields.file[0]).toMatch(/JPEG, PNG and WebP/);
+    const gif = await racer.post(`/api/cases/${c.id}/photos`).attach('file', Buffer.from('GIF89a\x01\x00\x01\x00'), { filename: 'x.png', contentType: 'image/png' });
+    expect(gif.status).toBe(415);
+    const missing = await racer.post(`/api/cases/${c.id}/photos`).field('caption', 'no file');
+    expect(missing.status).toBe(400);
+    expect(missing.body.fields.file).toBeDefined();
+    expect((await t.db.db.select().from(photos)).length).toBe(before);
+  });
+
+  it('refuses a photo over 15 MB with 413', async () => {
+    const big = Buffer.concat([Buffer.from([0xff, 0xd8, 0xff]), Buffer.alloc(15 * 1024 * 1024 + 10)]);
+    const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', big, { filename: 'big.jpg', contentType: 'image/jpeg' });
+    expect(res.status).toBe(413);
+  });
+
+  it('lets only people who can see the case list or fetch its photos', async () => {
+    const list = (await racer.get(`/api/cases/${c.id}/photos`)).body.photos;
+    expect(list).toHaveLength(1);
+    expect((await coach.get(`/api/cases/${c.id}/photos`)).status).toBe(404);
+    expect((await coach.get(list[0].url)).status).toBe(404);
+    expect((await t.http.get(list[0].url)).status).toBe(401);
+    // Once shared, the coach sees it and may answer with a photo too.
+    await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'coach@fuelwright.test', as: 'coach' });
+    const mail = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
+    await coach.post('/api/invitations/accept').send({ token: linkToken(mail, '/invitations/') });
+    expect((await coach.get(list[0].url)).status).toBe(200);
+  });
+
+  it('answers a photo request with an upload', async () => {
+    const reqd = (await coach.post(`/api/cases/${c.id}/photo-requests`).send({ what: 'The splash plate' })).body;
+    const png = await sharp({ create: { width: 40, height: 40, channels: 4, background: '#808080ff' } }).png().toBuffer();
+    const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', png, { filename: 'plate', contentType: 'application/octet-stream' }).field('photoRequestId', reqd.id);
+    expect(res.status).toBe(201);
+    expect(res.body.contentType).toBe('image/png');
+    const requests = (await coach.get(`/api/cases/${c.id}/photo-requests`)).body.requests;
+    expect(requests[0].fulfilledByPhotoId).toBe(res.body.id);
+  });
+});

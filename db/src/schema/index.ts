@@ -5,3 +5,4 @@ export * from './setups.js';
 export * from './cases.js';
 export * from './jetting.js';
 export * from './sharing.js';
+export * from './learning.js';

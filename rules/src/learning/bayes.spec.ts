@@ -105,41 +105,56 @@ describe('truncated Dirichlet (causes that cannot occur on some karts)', () => {
 });
 
 describe('likelihood ratio estimate', () => {
-  it('with no outcomes of the cause it returns the expert ratio exactly', () => {
-    const est = estimateLikelihoodRatio({ expertLr: 2.5, strength: 20, causeOutcomes: 0, causeFired: 0, referenceOutcomes: 99, referenceFired: 9 });
-    expect(est.lr).toBeCloseTo(2.5, 14);
-    expect(est.capped).toBe(false);
+  const base = { causeStrength: 4, referenceStrength: 10, pooledOutcomes: 200, pooledFired: 30 };
+
+  it('with no outcomes of the cause it keeps the expert ratio exactly', () => {
+    const est = estimateLikelihoodRatio({ ...base, expertLr: 2.5, causeOutcomes: 0, causeFired: 0, referenceOutcomes: 99, referenceFired: 9 });
+    expect(est.lr).toBe(2.5);
+    expect(est.kept).toBe(true);
+    // Even when the prior had to be capped (a rule that fires nearly always cannot have a ratio of 10).
+    const capped = estimateLikelihoodRatio({ ...base, expertLr: 10, causeOutcomes: 0, causeFired: 0, referenceOutcomes: 0, referenceFired: 0, pooledOutcomes: 0, pooledFired: 0 });
+    expect(capped.capped).toBe(true);
+    expect(capped.lr).toBe(10);
   });
 
   it('works a small case through by hand', () => {
-    // Reference: 9 of 99 fired -> Jeffreys Beta(9.5, 90.5), mean 0.095.
-    // Prior on P(fires | cause): mean 2 x 0.095 = 0.19, strength 20 -> Beta(3.8, 16.2).
-    // Cause: 5 of 10 fired -> Beta(8.8, 21.2), mean 8.8/30 = 0.29333.  LR = 0.29333 / 0.095 = 3.0877.
-    const est = estimateLikelihoodRatio({ expertLr: 2, strength: 20, causeOutcomes: 10, causeFired: 5, referenceOutcomes: 99, referenceFired: 9 });
-    expect(est.ifReference).toEqual({ alpha: 9.5, beta: 90.5 });
-    expect(est.causePrior.alpha).toBeCloseTo(3.8, 12);
-    expect(est.causePrior.beta).toBeCloseTo(16.2, 12);
-    expect(est.ifCause.alpha).toBeCloseTo(8.8, 12);
-    expect(est.ifCause.beta).toBeCloseTo(21.2, 12);
-    expect(est.lr).toBeCloseTo(8.8 / 30 / 0.095, 12);
+    // f = (30 + 1/2) / (200 + 1); reference prior Beta(10 f, 10 (1 - f)), 9 of 99 fired -> mean b = (10 f + 9) / 109.
+    // Cause prior mean m = 2 b at strength 4 -> Beta(4m, 4(1 - m)); 5 of 10 fired -> mean (4m + 5) / 14.
+    const f = 30.5 / 201;
+    const b = (10 * f + 9) / 109;
+    const m = 2 * b;
+    const a = (4 * m + 5) / 14;
+    const est = estimateLikelihoodRatio({ ...base, expertLr: 2, causeOutcomes: 10, causeFired: 5, referenceOutcomes: 99, referenceFired: 9 });
+    expect(est.referencePrior.alpha).toBeCloseTo(10 * f, 12);
+    expect(est.ifReference.alpha).toBeCloseTo(10 * f + 9, 12);
+    expect(est.ifReference.beta).toBeCloseTo(10 * (1 - f) + 90, 12);
+    expect(est.causePrior.alpha).toBeCloseTo(4 * m, 12);
+    expect(est.ifCause.alpha).toBeCloseTo(4 * m + 5, 12);
+    expect(est.ifCause.beta).toBeCloseTo(4 * (1 - m) + 5, 12);
+    expect(est.lr).toBeCloseTo(a / b, 12);
+    expect(est.lr).toBeCloseTo(4.2728, 3); // 0.41228 / 0.096490
+    expect(est.kept).toBe(false);
   });
 
   it('tends to the observed ratio of firing rates when outcomes far outweigh the prior', () => {
-    const est = estimateLikelihoodRatio({ expertLr: 5, strength: 10, causeOutcomes: 100_000, causeFired: 30_000, referenceOutcomes: 100_000, referenceFired: 10_000 });
+    const est = estimateLikelihoodRatio({ ...base, expertLr: 5, causeOutcomes: 100_000, causeFired: 30_000, referenceOutcomes: 100_000, referenceFired: 10_000 });
     expect(est.lr).toBeCloseTo(3, 2);
   });
 
   it('holds the prior mean below 1 when the expert ratio times the base rate reaches it', () => {
-    // Base rate (40.5 / 51) = 0.794; x 4 > 1 -> capped at MAX_PRIOR_FIRING.
-    const est = estimateLikelihoodRatio({ expertLr: 4, strength: 10, causeOutcomes: 0, causeFired: 0, referenceOutcomes: 50, referenceFired: 40 });
+    // Pooled 80 of 100 -> f = 80.5 / 101; reference 40 of 50 -> b = (10 f + 40) / 60 = 0.7995; x 4 > 1 -> m = 0.99.
+    const est = estimateLikelihoodRatio({ ...base, expertLr: 4, causeOutcomes: 2, causeFired: 2, referenceOutcomes: 50, referenceFired: 40, pooledOutcomes: 100, pooledFired: 80 });
+    const b = ((10 * 80.5) / 101 + 40) / 60;
     expect(est.capped).toBe(true);
     expect(betaMean(est.causePrior)).toBeCloseTo(MAX_PRIOR_FIRING, 12);
-    expect(est.lr).toBeCloseTo(MAX_PRIOR_FIRING / (40.5 / 51), 12);
+    expect(est.lr).toBeCloseTo((4 * MAX_PRIOR_FIRING + 2) / 6 / b, 12);
   });
 
-  it('rejects a zero strength or ratio', () => {
-    expect(() => estimateLikelihoodRatio({ expertLr: 2, strength: 0, causeOutcomes: 1, causeFired: 1, referenceOutcomes: 1, referenceFired: 0 })).toThrow(RangeError);
-    expect(() => estimateLikelihoodRatio({ expertLr: 0, strength: 1, causeOutcomes: 1, causeFired: 1, referenceOutcomes: 1, referenceFired: 0 })).toThrow(RangeError);
+  it('rejects a zero strength or ratio and impossible pooled counts', () => {
+    const ok = { ...base, expertLr: 2, causeOutcomes: 1, causeFired: 1, referenceOutcomes: 1, referenceFired: 0 };
+    expect(() => estimateLikelihoodRatio({ ...ok, causeStrength: 0 })).toThrow(RangeError);
+    expect(() => estimateLikelihoodRatio({ ...ok, expertLr: 0 })).toThrow(RangeError);
+    expect(() => estimateLikelihoodRatio({ ...ok, pooledFired: 300 })).toThrow(RangeError);
   });
 });
 

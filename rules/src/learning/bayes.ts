@@ -133,52 +133,66 @@ export function fitTruncatedDirichlet(alpha: readonly number[], groups: readonly
 export interface LikelihoodRatioInput {
   /** The expert's ratio. */
   expertLr: number;
-  /** Pseudo-outcomes of the rule's cause that the expert's P(fires | cause) weighs (> 0). */
-  strength: number;
+  /** Pseudo-outcomes the expert's view of P(fires | cause) weighs (> 0): strength x the cause's expert share. */
+  causeStrength: number;
+  /** Pseudo-outcomes the prior on P(fires | something else) weighs (> 0): strength x its expert share. */
+  referenceStrength: number;
   /** Outcomes confirming the rule's cause (where its parents fired), and of those where it fired. */
   causeOutcomes: number;
   causeFired: number;
   /** Outcomes confirming "something else" (where its parents fired), and of those where it fired. */
   referenceOutcomes: number;
   referenceFired: number;
+  /** All outcomes where the rule could fire (its parents fired), whatever their cause, and of those where it fired. */
+  pooledOutcomes: number;
+  pooledFired: number;
 }
 
 export interface LikelihoodRatioEstimate {
-  /** Ratio of the posterior means: E[P(fires | cause)] / E[P(fires | something else)]. */
+  /** Ratio of the posterior means, E[P(fires | cause)] / E[P(fires | something else)]; the expert's when no outcome of the cause was seen. */
   lr: number;
   /** Posterior of P(fires | cause). */
   ifCause: BetaParams;
-  /** Posterior of P(fires | something else) (Jeffreys prior Beta(1/2, 1/2) updated). */
+  /** Posterior of P(fires | something else). */
   ifReference: BetaParams;
-  /** Prior of P(fires | cause): mean expertLr x the reference base rate. */
+  /** Prior of P(fires | cause): mean expertLr x E[P(fires | something else)]. */
   causePrior: BetaParams;
-  /** True when expertLr x base rate reached the cap and the prior mean was held below 1. */
+  /** Prior of P(fires | something else): mean the pooled firing rate. */
+  referencePrior: BetaParams;
+  /** True when expertLr x the base rate reached the cap and the prior mean was held below 1. */
   capped: boolean;
+  /** True when no outcome of the cause was seen, so the expert's ratio was kept. */
+  kept: boolean;
 }
 
 /** Largest prior mean allowed for P(fires | cause). */
 export const MAX_PRIOR_FIRING = 0.99;
 
 /**
- * A rule's likelihood ratio from outcomes, with the expert's ratio as the prior:
- * - P(fires | something else) ~ Beta(1/2 + k0, 1/2 + n0 - k0): the reference base rate from the
- *   outcomes alone (Jeffreys prior); b = its mean;
- * - P(fires | cause) ~ Beta(s m, s (1 - m)) with m = expertLr x b, so with no outcomes of the
- *   cause the ratio of means is exactly the expert's; updated with kc of nc;
- * - LR = E[P(fires | cause)] / b.
+ * A rule's likelihood ratio from outcomes, with the expert's ratio as the prior (README.md):
+ * - f = (pooledFired + 1/2) / (pooledOutcomes + 1): how often the rule fires at all;
+ * - P(fires | something else) ~ Beta(s0 f, s0 (1 - f)) updated with k0 of n0; b = its mean;
+ * - P(fires | cause) ~ Beta(sc m, sc (1 - m)) with m = expertLr x b (held at most 0.99), updated
+ *   with kc of nc; so with no outcome of the cause the ratio of means is exactly the expert's;
+ * - LR = E[P(fires | cause)] / b. With nc = 0 the data say nothing about P(fires | cause) and the
+ *   expert's ratio is kept as it is.
  */
 export function estimateLikelihoodRatio(input: LikelihoodRatioInput): LikelihoodRatioEstimate {
-  const { expertLr, strength, causeOutcomes, causeFired, referenceOutcomes, referenceFired } = input;
+  const { expertLr, causeStrength, referenceStrength, causeOutcomes, causeFired, referenceOutcomes, referenceFired, pooledOutcomes, pooledFired } = input;
   if (!(expertLr > 0)) throw new RangeError(`expert LR must be > 0 (got ${expertLr})`);
-  if (!(strength > 0)) throw new RangeError(`strength must be > 0 (got ${strength})`);
-  const ifReference = betaPosterior({ alpha: 0.5, beta: 0.5 }, referenceFired, referenceOutcomes);
+  if (!(causeStrength > 0) || !(referenceStrength > 0)) throw new RangeError(`strengths must be > 0 (got ${causeStrength}, ${referenceStrength})`);
+  if (!(pooledOutcomes >= pooledFired) || !(pooledFired >= 0)) throw new RangeError(`need 0 <= pooledFired <= pooledOutcomes (got ${pooledFired} of ${pooledOutcomes})`);
+  const f = (pooledFired + 0.5) / (pooledOutcomes + 1);
+  const referencePrior = { alpha: referenceStrength * f, beta: referenceStrength * (1 - f) };
+  const ifReference = betaPosterior(referencePrior, referenceFired, referenceOutcomes);
   const base = betaMean(ifReference);
   let m = expertLr * base;
   const capped = m > MAX_PRIOR_FIRING;
   if (capped) m = MAX_PRIOR_FIRING;
-  const causePrior = { alpha: strength * m, beta: strength * (1 - m) };
+  const causePrior = { alpha: causeStrength * m, beta: causeStrength * (1 - m) };
   const ifCause = betaPosterior(causePrior, causeFired, causeOutcomes);
-  return { lr: betaMean(ifCause) / base, ifCause, ifReference, causePrior, capped };
+  const kept = !(causeOutcomes > 0);
+  return { lr: kept ? expertLr : betaMean(ifCause) / base, ifCause, ifReference, causePrior, referencePrior, capped, kept };
 }
 
 /**

@@ -25,7 +25,8 @@ export interface ProposeOptions {
   version: string;
   /**
    * How many outcomes the expert values weigh (> 0): the Dirichlet prior on the causes has this
-   * total, and a rule's P(fires | its cause) prior weighs strength x its cause's expert share.
+   * total, and a rule's priors on P(fires | its cause) and P(fires | something else) weigh
+   * strength x the expert share of the cause and of "something else".
    */
   strength: number;
   /** Seed of the hold-out split and of the Monte Carlo intervals (default 1). */
@@ -90,6 +91,9 @@ export interface RuleProposal {
     /** Outcomes of "something else" (weighted 1/m), and of those where it fired. */
     referenceOutcomes: number;
     referenceFired: number;
+    /** All outcomes where it could fire (parents fired), and of those where it fired: the prior's base rate. */
+    pooledOutcomes: number;
+    pooledFired: number;
     /** Rules for the same cause that always fire with it; the ratio is estimated where they fired. */
     parents: string[];
     /** Credible interval of the ratio (Monte Carlo). */
@@ -99,6 +103,8 @@ export interface RuleProposal {
     pFiresIfReference: number;
     /** The expert ratio times the base rate was held at the cap (see README). */
     capped: boolean;
+    /** No outcome of its cause was seen: the expert's ratio is kept. */
+    kept: boolean;
     /** The estimate rounded to 1, which a rule may not carry: nudged to 1.01 or 0.99 (a candidate for removal). */
     flat: boolean;
   };
@@ -225,6 +231,8 @@ export async function proposeRuleset(
   const kC = new Float64Array(R);
   const n0 = new Float64Array(R);
   const k0 = new Float64Array(R);
+  const nAll = new Float64Array(R);
+  const kAll = new Float64Array(R);
   const supportC = new Uint32Array(R);
   const support0 = new Uint32Array(R);
   const fired = new Uint8Array(R);
@@ -283,22 +291,25 @@ export async function proposeRuleset(
         set.push(j);
       }
     }
+    const yElse = targets.get(SOMETHING_ELSE_ID) ?? 0;
+    for (let j = 0; j < R; j++) {
+      if (!possible[ruleCause[j]] || !parentsFired(j)) continue;
+      nAll[j]++;
+      if (fired[j]) kAll[j]++;
+      if (yElse > 0) {
+        n0[j] += yElse;
+        support0[j]++;
+        if (fired[j]) k0[j] += yElse;
+      }
+    }
     for (const [id, y] of targets) {
       const k = slot.get(id)!;
-      if (k === ELSE) {
-        for (let j = 0; j < R; j++) {
-          if (!possible[ruleCause[j]] || !parentsFired(j)) continue;
-          n0[j] += y;
-          support0[j]++;
-          if (fired[j]) k0[j] += y;
-        }
-      } else {
-        for (const j of rulesByCause[k]) {
-          if (!parentsFired(j)) continue;
-          nC[j] += y;
-          supportC[j]++;
-          if (fired[j]) kC[j] += y;
-        }
+      if (k === ELSE) continue;
+      for (const j of rulesByCause[k]) {
+        if (!parentsFired(j)) continue;
+        nC[j] += y;
+        supportC[j]++;
+        if (fired[j]) kC[j] += y;
       }
     }
     for (const j of set) fired[j] = 0;
@@ -333,14 +344,17 @@ export async function proposeRuleset(
     const params = r.event.params as { cause: string; lr: number };
     const est = estimateLikelihoodRatio({
       expertLr: params.lr,
-      strength: strength * expertShare[ruleCause[j]],
+      causeStrength: strength * expertShare[ruleCause[j]],
+      referenceStrength: strength * expertShare[ELSE],
       causeOutcomes: nC[j],
       causeFired: kC[j],
       referenceOutcomes: n0[j],
       referenceFired: k0[j],
+      pooledOutcomes: nAll[j],
+      pooledFired: kAll[j],
     });
     const interval = ratioInterval(est.ifCause, est.ifReference, { mass: intervalMass, draws, seed: `${seed}:${r.name}` });
-    let proposed = roundSignificant(clamp(est.lr, LR_BOUNDS.min, LR_BOUNDS.max));
+    let proposed = est.kept ? params.lr : roundSignificant(clamp(est.lr, LR_BOUNDS.min, LR_BOUNDS.max));
     const flat = proposed === 1;
     if (flat) proposed = est.lr > 1 || (est.lr === 1 && params.lr > 1) ? 1.01 : 0.99;
     return {
@@ -356,11 +370,14 @@ export async function proposeRuleset(
         causeFired: kC[j],
         referenceOutcomes: n0[j],
         referenceFired: k0[j],
+        pooledOutcomes: nAll[j],
+        pooledFired: kAll[j],
         parents: parentsByName.get(r.name) ?? [],
         interval,
         pFiresIfCause: betaMean(est.ifCause),
         pFiresIfReference: betaMean(est.ifReference),
         capped: est.capped,
+        kept: est.kept,
         flat,
       },
     };

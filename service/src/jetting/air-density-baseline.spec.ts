@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { jettingSessions, karts, openDatabase, users, type DatabaseHandle } from '@fuelwright/db';
 import { AirDensityBaseline } from './air-density-baseline.js';
 
-describe('AirDensityBaseline', () => {
+describe('AirDensityBaseline', { timeout: 30_000 }, () => {
   let handle: DatabaseHandle;
   let baseline: AirDensityBaseline;
   let kartId: string;
@@ -35,7 +35,7 @@ describe('AirDensityBaseline', () => {
       ])
       .returning({ id: karts.id });
     baseline = new AirDensityBaseline(handle.db);
-  }, 30_000);
+  }, 120_000); // a fresh in-memory PGlite with the migrations: several seconds, more on a busy machine
   afterAll(() => handle.close());
 
   it('is null while no session of the kart ran right', async () => {

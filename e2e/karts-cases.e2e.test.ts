@@ -4,6 +4,8 @@ import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap as
 
 const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
 /** Other browser tests use the same demo racer: names made unique per run keep this test's rows apart. */
+/** expect.poll waits 1 s by default; a loaded machine needs longer. */
+const POLL = { timeout: 20_000 };
 const RUN = Date.now().toString(36).slice(-5);
 const KART_NAME = `Yellow 12 ${RUN}`;
 
@@ -79,7 +81,7 @@ describe('karts, setups and cases in the browser', () => {
     await kartForm.getByRole('button', { name: 'Add kart' }).click();
     await page.waitForURL(/\/karts\/[0-9a-f-]{36}$/);
     kartId = page.url().split('/').pop()!;
-    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain(KART_NAME);
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), POLL).toContain(KART_NAME);
     expect(await page.getByRole('button', { name: 'Diagnose this kart' }).getAttribute('href')).toBe(`/diagnose/new?kartId=${kartId}`);
 
     // No setup yet: the form is open. One field wrong first.
@@ -158,9 +160,9 @@ describe('karts, setups and cases in the browser', () => {
     await page.goto(`${baseUrl}/cases`);
     await page.getByLabel('Kart').selectOption(kartId);
     const caseCards = page.getByRole('list', { name: 'Your cases' });
-    await expect.poll(() => caseCards.getByRole('listitem').count()).toBe(2);
+    await expect.poll(() => caseCards.getByRole('listitem').count(), POLL).toBe(2);
     await page.getByLabel('State').selectOption('open');
-    await expect.poll(() => caseCards.getByRole('listitem').count()).toBe(1);
+    await expect.poll(() => caseCards.getByRole('listitem').count(), POLL).toBe(1);
     await caseCards.getByText('Bowl foam', { exact: false }).first().waitFor();
     await snap(page, 'karts-cases-case-list-phone');
 
@@ -218,12 +220,14 @@ describe('karts, setups and cases in the browser', () => {
     // Case list: all cases of this kart, sorted by probability then by state.
     await page.goto(`${baseUrl}/cases?kartId=${kartId}`);
     const cases = page.getByRole('table', { name: 'Your cases' });
-    await expect.poll(() => cases.locator('tbody tr').count()).toBe(2);
+    await expect.poll(() => cases.locator('tbody tr').count(), POLL).toBe(2);
     await page.getByRole('button', { name: 'Sort by state' }).click();
-    expect(await page.locator('th[aria-sort="ascending"]').textContent()).toBe('State');
-    expect(await cases.locator('tbody tr').first().getAttribute('data-case-id')).toBe(openCaseId);
+    await page.locator('th[aria-sort="ascending"]', { hasText: 'State' }).waitFor();
+    // Open cases first (the order of CASE_STATES), then the other way round.
+    await expect.poll(() => cases.locator('tbody tr').first().getAttribute('data-case-id'), POLL).toBe(openCaseId);
     await page.getByRole('button', { name: 'Sort by state' }).click();
-    expect(await cases.locator('tbody tr').last().getAttribute('data-case-id')).toBe(openCaseId);
+    await page.locator('th[aria-sort="descending"]', { hasText: 'State' }).waitFor();
+    await expect.poll(() => cases.locator('tbody tr').last().getAttribute('data-case-id'), POLL).toBe(openCaseId);
     await snap(page, 'karts-cases-case-list-desktop');
 
     await cases.locator(`tr[data-case-id="${openCaseId}"]`).getByRole('link').click();

@@ -7,6 +7,8 @@ export const paths = {
   quickDiagnosis: '/diagnose',
   /** Opens a case on one kart: `?kartId=<id>`. */
   diagnoseKart: '/diagnose/new',
+  /** After sign-up: turns the quick diagnosis kept in this browser into a case. */
+  saveQuickDiagnosis: '/diagnose/save',
   conditions: '/conditions',
   signIn: '/sign-in',
   signUp: '/sign-up',

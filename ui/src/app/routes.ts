@@ -166,7 +166,25 @@ export const appRoutes: readonly AppRoute[] = [
     path: paths.quickDiagnosis,
     title: 'Quick diagnosis',
     access: 'anyone',
-    page: () => import('../features/home/components/quick-diagnosis-page').then((m) => m.QuickDiagnosisPage),
+    page: () => import('../features/diagnosis/components/quick-diagnosis-page').then((m) => m.QuickDiagnosisPage),
     menu: { icon: DiagnosisIcon, order: 90 },
+  },
+  {
+    path: paths.diagnoseKart,
+    title: 'Diagnose a kart',
+    access: ['racer'],
+    page: () => import('../features/diagnosis/components/diagnose-kart-page').then((m) => m.DiagnoseKartPage),
+  },
+  {
+    path: paths.saveQuickDiagnosis,
+    title: 'Save the quick diagnosis',
+    access: ['racer'],
+    page: () => import('../features/diagnosis/components/save-quick-diagnosis-page').then((m) => m.SaveQuickDiagnosisPage),
+  },
+  {
+    path: paths.caseWalkThrough,
+    title: 'Walk-through',
+    access: ['racer'],
+    page: () => import('../features/diagnosis/components/case-walk-through-page').then((m) => m.CaseWalkThroughPage),
   },
 ];

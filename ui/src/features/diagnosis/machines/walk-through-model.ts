@@ -241,6 +241,7 @@ export function fromCase(dto: CaseDto) {
   return {
     caseId: dto.id,
     kartId: dto.kartId,
+    kartName: dto.kartName,
     symptoms: dto.symptoms,
     carburettorKind: (carburettorKind ?? null) as CarburettorKind | null,
     setupDraft: draftFromSetup(values),

@@ -63,6 +63,8 @@ export interface WalkThroughContext {
   mode: WalkThroughMode;
   caseId: string | null;
   kartId: string | null;
+  /** Case mode: the kart's name, from the case. */
+  kartName: string | null;
   displacementCc: number | null;
   // intake
   symptoms: SymptomReport[];
@@ -151,6 +153,7 @@ function emptyContext(input: WalkThroughInput): WalkThroughContext {
     mode: input.mode,
     caseId: input.caseId ?? null,
     kartId: input.kartId ?? null,
+    kartName: null,
     displacementCc: null,
     symptoms: [],
     carburettorKind: null,

@@ -189,5 +189,5 @@ describe('ratio interval', () => {
       expect(Math.abs(m.mean - mean)).toBeLessThan(5 * Math.sqrt(variance / 200_000));
       expect(Math.abs(m.variance / variance - 1)).toBeLessThan(0.03);
     }
-  });
+  }, 30_000);
 });

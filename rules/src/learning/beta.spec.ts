@@ -146,7 +146,7 @@ describe('Beta quantiles', () => {
       }),
       { numRuns: 1000, seed: 20261201 },
     );
-  });
+  }, 30_000);
 
   it('gives the equal-tailed interval and the end points 0 and 1', () => {
     const [lo, hi] = betaInterval(5, 3, 0.9);

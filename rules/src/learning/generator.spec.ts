@@ -21,7 +21,7 @@ describe('invented outcome generator', () => {
   it('gives the same records for the same seed and others for another seed', () => {
     expect([...generateOutcomes({ count: 400, seed: 'gen-spec' })]).toEqual(sample);
     expect([...generateOutcomes({ count: 50, seed: 'other' })].map((o) => o.symptoms)).not.toEqual(sample.slice(0, 50).map((o) => o.symptoms));
-  });
+  }, 30_000);
 
   it('is lazy: taking a few records of a huge count returns at once', () => {
     const it = generateOutcomes({ count: 1e9, seed: 1 });

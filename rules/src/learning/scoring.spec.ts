@@ -31,7 +31,7 @@ describe('fired-rules scorer', () => {
       const res = await engine.rank(req);
       expectSameRanking(scorer.score(o, plain.firedRules(req)), rankingFromResponse(res));
     }
-  });
+  }, 60_000);
 
   it('lists causes in the engine order, then something else', async () => {
     const o = outcomes[0];
@@ -56,7 +56,7 @@ describe('fired-rules scorer', () => {
     const byEngine = createEngineRanker(buildDiagnosisEngine);
     const byRules = createFiredRulesRanker();
     for (const o of outcomes.slice(0, 40)) expectSameRanking(await byRules(ruleset, o), await byEngine(ruleset, o));
-  });
+  }, 30_000);
 
   it('the fired-rules ranker refuses an outcome without fired rules', async () => {
     const o: OutcomeRecord = { id: 'x', rulesetVersion: '1.0.0', symptoms: [], confirmedCauses: ['something-else'], at: '2026-11-01T00:00:00Z' };

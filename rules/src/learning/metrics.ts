@@ -28,17 +28,22 @@ export function topKHit(ranking: readonly RankingEntry[], confirmed: ReadonlySet
   return false;
 }
 
-/** Multi-category Brier score of one ranking against target weights (hypothesis id -> weight, summing to 1). */
+const listed = (ranking: readonly RankingEntry[], id: string): boolean => {
+  for (const e of ranking) if (e.id === id) return true;
+  return false;
+};
+
+/**
+ * Multi-category Brier score of one ranking (distinct ids, as the engine gives them) against
+ * target weights (hypothesis id -> weight, summing to 1).
+ */
 export function brierScore(ranking: readonly RankingEntry[], targets: ReadonlyMap<string, number>): number {
   let sum = 0;
-  const seen = new Set<string>();
   for (const e of ranking) {
-    if (seen.has(e.id)) continue;
-    seen.add(e.id);
     const d = e.probability - (targets.get(e.id) ?? 0);
     sum += d * d;
   }
-  for (const [id, y] of targets) if (!seen.has(id)) sum += y * y;
+  for (const [id, y] of targets) if (!listed(ranking, id)) sum += y * y;
   return sum;
 }
 
@@ -62,12 +67,20 @@ export class AccuracyAccumulator {
   private brierSum = 0;
 
   add(ranking: readonly RankingEntry[], targets: ReadonlyMap<string, number>): void {
-    const sorted = sortRanking(ranking);
-    const within = (k: number) => sorted.slice(0, k).some((e) => targets.has(e.id));
+    this.addSorted(sortRanking(ranking), targets);
+  }
+
+  /** The same, for a ranking already sorted by `sortRanking`. */
+  addSorted(sorted: readonly RankingEntry[], targets: ReadonlyMap<string, number>): void {
     this.n++;
-    if (within(1)) this.hits1++;
-    if (within(3)) this.hits3++;
-    this.brierSum += brierScore(ranking, targets);
+    if (sorted.length > 0 && targets.has(sorted[0].id)) this.hits1++;
+    for (let i = 0; i < Math.min(3, sorted.length); i++) {
+      if (targets.has(sorted[i].id)) {
+        this.hits3++;
+        break;
+      }
+    }
+    this.brierSum += brierScore(sorted, targets);
   }
 
   result(): RankingAccuracy {
@@ -123,15 +136,10 @@ export class CalibrationAccumulator {
     this.sumY[i] += y;
   }
 
-  /** Every hypothesis a ranking lists, plus any confirmed hypothesis it leaves out (at p = 0). */
+  /** Every hypothesis a ranking (distinct ids) lists, plus any confirmed hypothesis it leaves out (at p = 0). */
   addRanking(ranking: readonly RankingEntry[], targets: ReadonlyMap<string, number>): void {
-    const seen = new Set<string>();
-    for (const e of ranking) {
-      if (seen.has(e.id)) continue;
-      seen.add(e.id);
-      this.addPrediction(e.probability, targets.get(e.id) ?? 0);
-    }
-    for (const [id, y] of targets) if (!seen.has(id)) this.addPrediction(0, y);
+    for (const e of ranking) this.addPrediction(e.probability, targets.get(e.id) ?? 0);
+    for (const [id, y] of targets) if (!listed(ranking, id)) this.addPrediction(0, y);
   }
 
   result(): Calibration {
@@ -248,11 +256,10 @@ export interface WrongWayRules {
  * that cannot occur on the kart's carburettor kind are not counted (the ranking ignored them).
  */
 export class WrongWayRulesAccumulator {
-  private readonly byName = new Map<string, { cause: string; lr: number; kinds?: readonly string[] }>();
+  private readonly byName = new Map<string, { cause: string; lr: number; kinds?: readonly string[]; fired: number; wrong: number; seenAt: number }>();
   private readonly stopRules = new Set<string>();
-  private readonly fired = new Map<string, number>();
-  private readonly wrong = new Map<string, number>();
   private unknown = 0;
+  private calls = 0;
 
   constructor(ruleset: Ruleset) {
     const kinds = new Map(ruleset.catalog.causes.map((c) => [c.id, c.carburettorKinds]));
@@ -261,32 +268,34 @@ export class WrongWayRulesAccumulator {
         this.stopRules.add(r.name);
         continue;
       }
-      this.byName.set(r.name, { cause: r.event.params.cause, lr: r.event.params.lr, kinds: kinds.get(r.event.params.cause) });
+      this.byName.set(r.name, { cause: r.event.params.cause, lr: r.event.params.lr, kinds: kinds.get(r.event.params.cause), fired: 0, wrong: 0, seenAt: -1 });
     }
   }
 
   add(firedRules: readonly string[], confirmed: ReadonlySet<string>, carburettorKind?: string): void {
-    for (const name of new Set(firedRules)) {
+    const call = this.calls++;
+    for (const name of firedRules) {
       const r = this.byName.get(name);
       if (!r) {
         // A stop rule never points at a cause; any other name is not in this ruleset.
         if (!this.stopRules.has(name)) this.unknown++;
         continue;
       }
+      if (r.seenAt === call) continue; // listed twice
+      r.seenAt = call;
       if (carburettorKind && r.kinds && !r.kinds.includes(carburettorKind)) continue;
-      this.fired.set(name, (this.fired.get(name) ?? 0) + 1);
+      r.fired++;
       const isConfirmed = confirmed.has(r.cause);
-      if (r.lr > 1 ? !isConfirmed : isConfirmed) this.wrong.set(name, (this.wrong.get(name) ?? 0) + 1);
+      if (r.lr > 1 ? !isConfirmed : isConfirmed) r.wrong++;
     }
   }
 
   /** The `limit` rules with the most wrong-way firings (ties: higher rate, then name). */
   result(limit = 20): WrongWayRules {
     const rules: WrongWayRule[] = [];
-    for (const [rule, fired] of this.fired) {
-      const r = this.byName.get(rule)!;
-      const wrongWay = this.wrong.get(rule) ?? 0;
-      rules.push({ rule, cause: r.cause, lr: r.lr, direction: r.lr > 1 ? 'for' : 'against', fired, wrongWay, wrongWayRate: wrongWay / fired });
+    for (const [rule, r] of this.byName) {
+      if (!r.fired) continue;
+      rules.push({ rule, cause: r.cause, lr: r.lr, direction: r.lr > 1 ? 'for' : 'against', fired: r.fired, wrongWay: r.wrong, wrongWayRate: r.wrong / r.fired });
     }
     rules.sort((a, b) => b.wrongWay - a.wrongWay || b.wrongWayRate - a.wrongWayRate || (a.rule < b.rule ? -1 : 1));
     return { rules: rules.slice(0, limit), unknownRuleFirings: this.unknown };
@@ -371,10 +380,10 @@ export class InsightsAccumulator {
     const open = outcome.openingRank;
     if (open && open.causes.length) {
       this.rankedN++;
-      this.accuracy.add(open.causes, targets);
-      this.calibration.addRanking(open.causes, targets);
-      const top = sortRanking(open.causes)[0];
-      this.topLabel.addPrediction(top.probability, targets.has(top.id) ? 1 : 0);
+      const sorted = sortRanking(open.causes);
+      this.accuracy.addSorted(sorted, targets);
+      this.calibration.addRanking(sorted, targets);
+      this.topLabel.addPrediction(sorted[0].probability, targets.has(sorted[0].id) ? 1 : 0);
       this.wrongWay.add(open.firedRules, new Set(confirmed), outcome.setup?.carburettorKind);
     }
   }

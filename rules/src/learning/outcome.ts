@@ -70,10 +70,8 @@ export function confirmedWeights(confirmed: readonly string[], known?: (id: stri
 
 /** Entries by probability, highest first; ties keep their order in the list. */
 export function sortRanking(entries: readonly RankingEntry[]): RankingEntry[] {
-  return entries
-    .map((e, i) => ({ e, i }))
-    .sort((x, y) => y.e.probability - x.e.probability || x.i - y.i)
-    .map((x) => x.e);
+  // Array.prototype.sort is stable (ECMAScript 2019), so equal probabilities keep their order.
+  return entries.slice().sort((x, y) => y.probability - x.probability);
 }
 
 /** The date part (`YYYY-MM-DD`) of an ISO timestamp, when it has one. */

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+import type { Browser, Locator, Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import { DESKTOP, PHONE, SCREENSHOT_DIR, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
 
 const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
 /** Other browser tests use the same demo racer: names made unique per run keep this test's rows apart. */
@@ -27,6 +28,12 @@ async function signIn(page: Page, baseUrl: string): Promise<void> {
 async function snap(page: Page, name: string): Promise<void> {
   await page.evaluate(() => window.scrollTo(0, 0));
   await snapPage(page, name);
+}
+
+/** A screenshot of one part of the page. */
+async function snapPart(locator: Locator, name: string): Promise<void> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await locator.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
 }
 
 /** Calls the API from inside the page (same origin, the session cookie goes along). */
@@ -133,8 +140,7 @@ describe('karts, setups and cases in the browser', () => {
     expect(changed).toEqual(['Main jet', 'Air screw']);
     expect(await newest.locator('.fw-setup-changed').first().textContent()).toContain('was 185');
     await snap(page, 'karts-cases-kart-page-phone');
-    await cards.scrollIntoViewIfNeeded();
-    await snap(page, 'karts-cases-setups-phone');
+    await snapPart(page.getByRole('region', { name: 'Setups' }), 'karts-cases-setups-phone');
 
     // The kart list shows it as a card.
     await page.goto(`${baseUrl}/karts`);
@@ -214,8 +220,7 @@ describe('karts, setups and cases in the browser', () => {
     await form.getByText('Use a whole groove number, counted from the top of the needle: 1 (top groove) to 7.').waitFor();
     await snap(page, 'karts-cases-setup-form-error-desktop');
     await form.getByRole('button', { name: 'Cancel' }).click();
-    await setups.scrollIntoViewIfNeeded();
-    await snap(page, 'karts-cases-setups-desktop');
+    await snapPart(page.getByRole('region', { name: 'Setups' }), 'karts-cases-setups-desktop');
 
     // Case list: all cases of this kart, sorted by probability then by state.
     await page.goto(`${baseUrl}/cases?kartId=${kartId}`);

@@ -19,8 +19,8 @@ const USERS = {
 };
 
 /** Fakes the API for one page: `who` is a role or null for a visitor. */
-async function fakeApi(page, who) {
-  await page.route('**/api/**', async (route) => {
+async function fakeApi(page, who, base) {
+  await page.route(`${base}/api/**`, async (route) => {
     const url = new URL(route.request().url());
     const method = route.request().method();
     const json = (status, body) => route.fulfill({ status, contentType: 'application/json', body: JSON.stringify(body) });
@@ -91,7 +91,7 @@ try {
           if (!request.url().startsWith(base)) external.add(request.url());
         });
         page.on('pageerror', (error) => console.error(`${shot.name}: page error: ${error.message}`));
-        await fakeApi(page, shot.who);
+        await fakeApi(page, shot.who, base);
         await page.goto(base + shot.path, { waitUntil: 'networkidle' });
         await page.locator('main h1').first().waitFor();
         if (shot.act) await shot.act(page);

@@ -28,12 +28,13 @@ describe('route guards', () => {
     expect(screen.getByRole('heading', { name: 'Work orders' })).toBeInTheDocument();
   });
 
-  it('lets anyone open the quick diagnosis, cautions first', async () => {
+  it('lets a visitor open a page open to anyone (the quick diagnosis)', async () => {
     mockApi({ 'GET /auth/me': meReply(null) });
-    renderApp('/diagnose');
-    expect(await screen.findByRole('heading', { name: /quick diagnosis/i, level: 1 })).toBeInTheDocument();
-    expect(screen.getByText('Caution')).toBeInTheDocument();
-    expect(screen.getByText('Stop')).toBeInTheDocument();
+    const { router } = renderApp('/diagnose');
+    expect(await screen.findByRole('heading', { level: 1 })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/diagnose');
+    expect(screen.queryByRole('form', { name: 'Sign in' })).toBeNull();
+    expect(screen.queryByRole('heading', { name: 'Not for your role' })).toBeNull();
   });
 
   it('shows a not-found page for an unknown path', async () => {

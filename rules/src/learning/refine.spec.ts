@@ -71,6 +71,8 @@ describe('proposeRuleset: hand-computed small case', () => {
     expect(intervals[1][1]).toBeCloseTo(0.4191202289169427, 10);
     expect(intervals[2][0]).toBeCloseTo(0.2739458450823201, 10);
     expect(intervals[2][1]).toBeCloseTo(0.6318847929794846, 10);
+    // Old values 0.2, 0.3, 0.5 all lie inside their intervals.
+    expect(p.priors.map((x) => x.evidence.oldOutsideInterval)).toEqual([false, false, false]);
   });
 
   it('updates the ratios (strength 10: cause A weighs 2, cause B 3, something else 5 pseudo-outcomes)', async () => {
@@ -102,6 +104,10 @@ describe('proposeRuleset: hand-computed small case', () => {
     expect(b.proposed).toBe(6.49); // 0.49689 / 0.076585
     expect(a.evidence.interval[0]).toBeLessThan(a.proposed);
     expect(a.evidence.interval[1]).toBeGreaterThan(a.proposed);
+    // Ten outcomes of each cause: 3 stays inside A's wide interval; B fired in 6 of 10 against 1 of 20, so 2 is below B's.
+    expect(a.evidence.oldOutsideInterval).toBe(false);
+    expect(b.evidence.interval[0]).toBeGreaterThan(2);
+    expect(b.evidence.oldOutsideInterval).toBe(true);
     expect(p.changedRules).toBe(2);
   });
 
@@ -305,6 +311,8 @@ describe('proposeRuleset on the shipped ruleset and invented outcomes', () => {
     expect(p.backTest.scored).toBe(p.backTest.heldOut);
     expect(p.backTest.after.brier).toBeLessThan(p.backTest.before.brier);
     expect(p.changedPriors).toBeGreaterThan(20);
+    // With 4,200 outcomes from a world a factor of e^0.5 away, the data contradict many expert numbers.
+    expect(p.priors.filter((x) => x.evidence.oldOutsideInterval).length).toBeGreaterThan(5);
     expect(p.ruleset.version).toBe('1.0.1');
   }, 60_000);
 });

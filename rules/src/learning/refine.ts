@@ -72,6 +72,8 @@ export interface PriorProposal {
     posterior: BetaParams;
     /** Credible interval of the prior, on the same scale as `old` and `proposed`. */
     interval: [number, number];
+    /** The old value lies outside the credible interval: the outcomes disagree with it. */
+    oldOutsideInterval: boolean;
   };
 }
 
@@ -98,6 +100,8 @@ export interface RuleProposal {
     parents: string[];
     /** Credible interval of the ratio (Monte Carlo). */
     interval: [number, number];
+    /** The old ratio lies outside the credible interval: the outcomes disagree with it (false when kept). */
+    oldOutsideInterval: boolean;
     /** Posterior means of P(fires | cause) and P(fires | something else). */
     pFiresIfCause: number;
     pFiresIfReference: number;
@@ -335,6 +339,7 @@ export async function proposeRuleset(
         imputed: fit.imputed[k],
         posterior,
         interval: [lo * priorScale, hi * priorScale],
+        oldOutsideInterval: old < lo * priorScale || old > hi * priorScale,
       },
     };
   });
@@ -374,6 +379,7 @@ export async function proposeRuleset(
         pooledFired: kAll[j],
         parents: parentsByName.get(r.name) ?? [],
         interval,
+        oldOutsideInterval: !est.kept && (params.lr < interval[0] || params.lr > interval[1]),
         pFiresIfCause: betaMean(est.ifCause),
         pFiresIfReference: betaMean(est.ifReference),
         capped: est.capped,

@@ -140,7 +140,7 @@ describe('karts, setups and cases in the browser', () => {
     expect(changed).toEqual(['Main jet', 'Air screw']);
     expect(await newest.locator('.fw-setup-changed').first().textContent()).toContain('was 185');
     await snap(page, 'karts-cases-kart-page-phone');
-    await snapPart(page.getByRole('region', { name: 'Setups' }), 'karts-cases-setups-phone');
+    await snapPart(page.getByRole('region', { name: 'Setups', exact: true }), 'karts-cases-setups-phone');
 
     // The kart list shows it as a card.
     await page.goto(`${baseUrl}/karts`);
@@ -220,7 +220,7 @@ describe('karts, setups and cases in the browser', () => {
     await form.getByText('Use a whole groove number, counted from the top of the needle: 1 (top groove) to 7.').waitFor();
     await snap(page, 'karts-cases-setup-form-error-desktop');
     await form.getByRole('button', { name: 'Cancel' }).click();
-    await snapPart(page.getByRole('region', { name: 'Setups' }), 'karts-cases-setups-desktop');
+    await snapPart(page.getByRole('region', { name: 'Setups', exact: true }), 'karts-cases-setups-desktop');
 
     // Case list: all cases of this kart, sorted by probability then by state.
     await page.goto(`${baseUrl}/cases?kartId=${kartId}`);

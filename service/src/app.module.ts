@@ -12,6 +12,7 @@ import { KartsModule } from './karts/karts.module.js';
 import { CasesModule } from './cases/cases.module.js';
 import { SharingModule } from './sharing/sharing.module.js';
 import { PhotosModule } from './photos/photos.module.js';
+import { LearningModule } from './learning/learning.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { DiagnosisModule } from './diagnosis/diagnosis.module.js';
 import { ConditionsModule } from './conditions/conditions.module.js';
@@ -52,6 +53,7 @@ export class AppModule {
         MailModule,
         SharingModule,
         PhotosModule,
+        LearningModule,
         ConditionsModule,
         JettingModule,
         PreferencesModule,

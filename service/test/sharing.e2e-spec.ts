@@ -70,6 +70,8 @@ describe('sharing a case with a coach', () => {
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ authorName: 'Marit Quayle', authorRole: 'coach', body: 'Is the foam <b>crumbling</b>?' });
     await racer.post(`/api/cases/${c.id}/comments`).send({ body: 'Yes, it is brown and soft.' });
+    const dash = (await coach.get('/api/shared-cases')).body.cases.find((x: { id: string }) => x.id === c.id);
+    expect(dash.comments).toBe(2);
     const thread = (await racer.get(`/api/cases/${c.id}/comments`)).body.comments;
     expect(thread.map((x: { body: string }) => x.body)).toEqual(['Is the foam <b>crumbling</b>?', 'Yes, it is brown and soft.']);
     const mails = (await flushMail(t)).slice(before);

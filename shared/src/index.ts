@@ -9,3 +9,4 @@ export * from './jetting/index.js';
 export * from './cases.js';
 export * from './jetting-log.js';
 export * from './sharing.js';
+export * from './learning.js';

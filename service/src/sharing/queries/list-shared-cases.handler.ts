@@ -1,7 +1,7 @@
 import { Inject } from '@nestjs/common';
 import { QueryHandler, type IQueryHandler } from '@nestjs/cqrs';
 import { and, desc, eq, isNull, or, sql } from 'drizzle-orm';
-import { cases, comments, karts, photoRequests, shares, users, type Db } from '@fuelwright/db';
+import { cases, karts, shares, users, type Db } from '@fuelwright/db';
 import { DB } from '../../database/database.tokens.js';
 import { ListSharedCasesQuery } from './review.queries.js';
 
@@ -35,8 +35,8 @@ export class ListSharedCasesHandler implements IQueryHandler<ListSharedCasesQuer
         topCauseProbability: cases.topCauseProbability,
         updatedAt: cases.updatedAt,
         openedAt: cases.openedAt,
-        comments: sql<number>`(select count(*)::int from ${comments} where ${comments.caseId} = ${cases.id})`,
-        pendingPhotoRequests: sql<number>`(select count(*)::int from ${photoRequests} where ${photoRequests.caseId} = ${cases.id} and ${photoRequests.fulfilledByPhotoId} is null)`,
+        comments: sql<number>`(select count(*)::int from "comments" cm where cm."case_id" = "cases"."id")`,
+        pendingPhotoRequests: sql<number>`(select count(*)::int from "photo_requests" pr where pr."case_id" = "cases"."id" and pr."fulfilled_by_photo_id" is null)`,
       })
       .from(cases)
       .innerJoin(karts, eq(karts.id, cases.kartId))

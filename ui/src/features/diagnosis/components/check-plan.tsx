@@ -23,6 +23,7 @@ export function CheckPlan({
     return <p className="fw-muted">No checks left in the plan.</p>;
   }
   const steps = all ? plan : plan.slice(0, SHOWN);
+  const later = plan.filter((s) => skipped.includes(s.checkId));
   return (
     <div className="fw-diag-plan-wrap">
       <p className="fw-diag-plan-lead">
@@ -66,6 +67,11 @@ export function CheckPlan({
           );
         })}
       </ol>
+      {later.length > 0 && (
+        <p className="fw-muted fw-small fw-diag-skipped-note">
+          Skipped for now, moved to the end of the plan: {later.map((s) => s.label).join('; ')}.
+        </p>
+      )}
       {plan.length > SHOWN && (
         <Button
           className="fw-touch"

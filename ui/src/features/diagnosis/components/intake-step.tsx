@@ -51,6 +51,10 @@ export function IntakeStep({
     .filter(([key]) => !placed.has(key))
     .flatMap(([key, messages]) => messages.map((m) => `${key.startsWith('symptoms') ? 'Symptom' : key}: ${m}`));
   const kart = karts?.find((k) => k.id === ctx.kartId);
+  const [setupShown, setSetupShown] = useState(isCase || Object.keys(ctx.setupDraft).length > 0);
+  // A message about a setup value opens the setup, so the message is seen.
+  const setupHasErrors = [...Object.keys(ctx.formErrors), ...Object.keys(serverFields)].some((k) => k.startsWith('setup.'));
+  const setupOpen = setupShown || setupHasErrors;
 
   // A kart given in the address (?kartId=): take its carburettor and its latest setup once loaded.
   useEffect(() => {
@@ -189,7 +193,7 @@ export function IntakeStep({
                 : 'Fill in what you know; leave the rest empty. It sharpens the ranking.'
             }
             collapsible
-            collapseProps={{ defaultIsOpen: isCase || Object.keys(ctx.setupDraft).length > 0 }}
+            collapseProps={{ isOpen: setupOpen, onToggle: () => setSetupShown(!setupOpen) }}
           >
             <SectionCard>
               <SetupFields

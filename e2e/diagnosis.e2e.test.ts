@@ -1,0 +1,370 @@
+/**
+ * The guided walk-through in a real browser: a visitor's quick diagnosis on a phone (cautions
+ * first, two results, the ranking changes, leave and come back, a stop), saving it after sign-up,
+ * and the demo racer's case on "Blue 27" from intake to resolved, found again in the case list.
+ * Screenshots of every main screen at phone and desktop width go to screenshots/ (git-ignored).
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser, Locator, Page } from 'playwright-core';
+import type { CatalogResponse, CaseDto } from '@fuelwright/shared';
+import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+
+const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
+/** expect.poll and waits: a loaded machine needs longer than the defaults. */
+const WAIT = { timeout: 20_000 };
+const RUN = Date.now().toString(36).slice(-5);
+
+/** A full-page screenshot from the top (the sticky navbar is drawn where the page is scrolled to). */
+async function snap(page: Page, name: string): Promise<void> {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await snapPage(page, name);
+}
+
+/** Waits until the element shows (vitest's expect has no browser matchers). */
+async function visible(locator: Locator): Promise<void> {
+  await locator.first().waitFor({ state: 'visible', ...WAIT });
+}
+
+async function api<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
+  return page.evaluate(
+    async ({ method, path, body }) => {
+      const res = await fetch(path, {
+        method,
+        headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
+      return { status: res.status, body: await res.json().catch(() => null) };
+    },
+    { method, path, body },
+  );
+}
+
+/** The screen the walk-through shows, and the machine's state (data attributes on its root). */
+async function screenOf(page: Page): Promise<{ screen: string | null; state: unknown }> {
+  const root = page.locator('.fw-diag');
+  const state = await root.getAttribute('data-state');
+  return { screen: await root.getAttribute('data-screen'), state: state ? JSON.parse(state) : null };
+}
+
+async function waitForScreen(page: Page, screen: string): Promise<void> {
+  await page.locator(`.fw-diag[data-screen="${screen}"]`).waitFor(WAIT);
+}
+
+/** Every cause with its probability as shown (all causes listed). */
+async function shownCauses(page: Page): Promise<Map<string, number>> {
+  const all = page.getByRole('button', { name: /^Show all \d+ causes$/ });
+  if (await all.count()) await all.click();
+  const rows = await page.locator('[data-cause]').evaluateAll((els) =>
+    els.map((el) => [el.getAttribute('data-cause')!, Number(el.getAttribute('data-probability'))] as const),
+  );
+  return new Map(rows);
+}
+
+async function pickSymptom(page: Page, id: string): Promise<void> {
+  await page.locator(`[data-symptom="${id}"] label`).first().click();
+}
+
+/** The check on screen, its cautions acknowledged when it shows them first; answers whether it did. */
+async function openCheck(page: Page): Promise<{ checkId: string; hadCautions: boolean }> {
+  await waitForScreen(page, 'check');
+  const checkId = (await page.locator('.fw-diag-step[data-check]').getAttribute('data-check'))!;
+  const { state } = await screenOf(page);
+  const hadCautions = JSON.stringify(state) === JSON.stringify({ check: 'cautions' });
+  if (hadCautions) {
+    // Cautions first: neither the steps nor the result buttons are there yet.
+    await visible(page.getByRole('heading', { name: /Before you start/ }));
+    expect(await page.getByRole('heading', { name: 'Steps', exact: true }).count()).toBe(0);
+    expect(await page.getByRole('radio', { name: 'Looks fine' }).count()).toBe(0);
+    await page.getByRole('button', { name: /I have read the cautions/ }).click();
+  }
+  await visible(page.getByRole('heading', { name: 'Steps', exact: true }));
+  return { checkId, hadCautions };
+}
+
+async function record(page: Page, result: 'Fault found' | 'Looks fine' | 'Could not check', note?: string): Promise<void> {
+  await page.getByRole('radio', { name: result }).click();
+  if (note) await page.getByLabel('Note (optional)').fill(note);
+  await page.getByRole('button', { name: /^Record (the result|again)$/ }).click();
+}
+
+/**
+ * A visitor's quick diagnosis: bogging plus sporadic running on a pump-around carburettor, two
+ * checks recorded (at least one of them behind cautions), then leave mid-check and come back.
+ * Screenshots named `<tag>-...`.
+ */
+async function quickDiagnosis(page: Page, baseUrl: string, tag: string, catalog: CatalogResponse) {
+  await page.goto(`${baseUrl}/diagnose`);
+  await waitForScreen(page, 'intake');
+  await pickSymptom(page, 'bog-on-acceleration');
+  await page.locator('[data-symptom="bog-on-acceleration"]').getByRole('button', { name: 'Corner exit' }).click();
+  await pickSymptom(page, 'sporadic-running');
+  await page.getByText('Pump-around slide carburettor', { exact: true }).click();
+  await snap(page, `${tag}-01-intake`);
+  await page.getByRole('button', { name: 'Show the likely causes' }).click();
+  await waitForScreen(page, 'ranking');
+  await snap(page, `${tag}-02-ranking`);
+  const before = await shownCauses(page);
+  expect(before.size).toBeGreaterThan(3);
+
+  // Two checks; the first one in the plan handles the throttle and carries cautions.
+  const recorded: string[] = [];
+  let sawCautions = false;
+  for (let i = 0; i < 2; i++) {
+    await page.getByRole('button', { name: /^(Start with|Next check):/ }).click();
+    await waitForScreen(page, 'check');
+    if (i === 0) await snap(page, `${tag}-03-check-cautions`);
+    const { checkId, hadCautions } = await openCheck(page);
+    sawCautions ||= hadCautions;
+    if (i === 0) await snap(page, `${tag}-04-check-steps`);
+    await record(page, 'Looks fine', i === 0 ? 'all as it should be' : undefined);
+    await waitForScreen(page, 'ranking');
+    await visible(page.getByText('Result recorded'));
+    recorded.push(checkId);
+  }
+  expect(sawCautions).toBe(true);
+  await snap(page, `${tag}-05-reranked`);
+
+  // The ranking changed: the recorded checks left the plan, and each one's most-tested cause fell.
+  const after = await shownCauses(page);
+  const changed = [...before].filter(([id, p]) => Math.abs((after.get(id) ?? 0) - p) >= 0.005);
+  expect(changed.length).toBeGreaterThan(0);
+  for (const checkId of recorded) {
+    expect(await page.locator(`.fw-diag-plan [data-check="${checkId}"]`).count()).toBe(0);
+    const check = catalog.checks.find((c) => c.id === checkId)!;
+    const tested = [...check.tests].sort((a, b) => b.sensitivity - a.sensitivity)[0];
+    // Bayes' rule (PRODUCT.md, "How a diagnosis works"): a "looks fine" on a check that can find a
+    // cause (sensitivity > 0) lowers that cause's probability.
+    if (tested && before.has(tested.cause)) expect(after.get(tested.cause)!).toBeLessThan(before.get(tested.cause)!);
+  }
+  return { recorded };
+}
+
+describe('the guided walk-through in the browser', () => {
+  const baseUrl = inject('baseUrl');
+  let browser: Browser;
+  let catalog: CatalogResponse;
+
+  beforeAll(async () => {
+    browser = await launchChromium();
+    catalog = (await (await fetch(`${baseUrl}/api/catalog`)).json()) as CatalogResponse;
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('a visitor on a phone: cautions first, two results change the ranking, leave and come back, a stop ends it', async () => {
+    const { context, page } = await newPage(browser, PHONE, 'light');
+    const outside = recordOutsideRequests(page, baseUrl);
+    try {
+      const { recorded } = await quickDiagnosis(page, baseUrl, 'diagnosis-phone', catalog);
+
+      // Leave in the middle of a check (cautions acknowledged) and come back: the same place.
+      await page.getByRole('button', { name: /^Next check:/ }).click();
+      const { checkId: leftOn } = await openCheck(page);
+      await page.getByRole('radio', { name: 'Could not check' }).click();
+      await page.goto(`${baseUrl}/conditions`);
+      await page.goto(`${baseUrl}/diagnose`);
+      await waitForScreen(page, 'check');
+      expect((await screenOf(page)).state).toEqual({ check: 'steps' });
+      expect(await page.locator('.fw-diag-step[data-check]').getAttribute('data-check')).toBe(leftOn);
+
+      // Back goes to the previous check with its result; recording again replaces it.
+      await page.getByRole('button', { name: 'Back', exact: true }).click();
+      await expect.poll(() => page.locator('.fw-diag-step[data-check]').getAttribute('data-check'), WAIT).toBe(recorded[1]);
+      await visible(page.getByText('Recorded earlier:'));
+      await record(page, 'Could not check');
+      await waitForScreen(page, 'ranking');
+      await expect.poll(() => page.locator('.fw-diag-last').innerText(), WAIT).toContain('Could not check');
+
+      // Skip moves the next check to the end of the plan for now.
+      const next = await page.locator('.fw-diag-plan [data-check]').first().getAttribute('data-check');
+      await page.getByRole('button', { name: /^Next check:/ }).click();
+      await waitForScreen(page, 'check');
+      await page.getByRole('button', { name: 'Skip for now' }).click();
+      await expect.poll(() => page.locator('.fw-diag-step[data-check]').getAttribute('data-check'), WAIT).not.toBe(next);
+      await page.getByRole('button', { name: 'See the causes' }).click();
+      await waitForScreen(page, 'ranking');
+      const skippedLabel = catalog.checks.find((c) => c.id === next)!.label;
+      await expect.poll(() => page.locator('.fw-diag-skipped-note').innerText(), WAIT).toContain(skippedLabel);
+      await page.getByRole('button', { name: /^Show all \d+ checks$/ }).click();
+      await expect.poll(() => page.locator(`.fw-diag-plan [data-check="${next}"]`).innerText(), WAIT).toContain('Skipped for now');
+      // ...at the end of the plan.
+      expect(await page.locator('.fw-diag-plan [data-check]').last().getAttribute('data-check')).toBe(next);
+
+      // Finish: the summary lists every check.
+      await page.getByRole('button', { name: 'Finish without a fix' }).click();
+      await waitForScreen(page, 'summary');
+      await snap(page, 'diagnosis-phone-06-summary');
+      await expect.poll(() => page.getByRole('table').innerText(), WAIT).toContain('Looks fine');
+
+      // A new one: the throttle is slow to return and the throttle check finds the fault: Stop.
+      await page.getByRole('button', { name: 'Start a new diagnosis' }).click();
+      await waitForScreen(page, 'intake');
+      await pickSymptom(page, 'throttle-slow-to-return');
+      await visible(page.locator('[data-symptom="throttle-slow-to-return"]').getByText(/^Stop:/));
+      await page.getByText('Pump-around slide carburettor', { exact: true }).click();
+      await page.getByRole('button', { name: 'Show the likely causes' }).click();
+      await waitForScreen(page, 'ranking');
+      // The symptom's own caution leads the ranking.
+      await expect.poll(() => page.getByLabel('Cautions for these symptoms').innerText(), WAIT).toContain('Stop:');
+      await page.getByRole('button', { name: /^Start with:/ }).click();
+      const { checkId } = await openCheck(page);
+      expect(catalog.checks.find((c) => c.id === checkId)?.stopOnFault).toBe(true);
+      await record(page, 'Fault found');
+      await waitForScreen(page, 'stopped');
+      await expect.poll(() => page.locator('.fw-diag-stop').innerText(), WAIT).toContain('do not drive');
+      await expect.poll(() => page.locator('.fw-diag-stop').innerText(), WAIT).toContain('qualified engine builder');
+      await expect.poll(() => page.locator('.fw-diag-stop').innerText(), WAIT).toContain('technical inspection');
+      await snap(page, 'diagnosis-phone-07-stop');
+      await page.getByRole('button', { name: 'I understand' }).click();
+      await waitForScreen(page, 'summary');
+      await snap(page, 'diagnosis-phone-08-summary-stop');
+      expect(outside).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('the same screens at desktop width in the dark theme', async () => {
+    const { context, page } = await newPage(browser, DESKTOP, 'dark');
+    try {
+      await quickDiagnosis(page, baseUrl, 'diagnosis-desktop', catalog);
+      await page.getByRole('button', { name: /say what fixed it/i }).click();
+      await waitForScreen(page, 'resolve');
+      await page.getByText(catalog.somethingElse.label, { exact: true }).click();
+      await page.getByLabel('What you did').fill('Tightened the plug cap');
+      await snap(page, 'diagnosis-desktop-06-resolve');
+      await page.getByRole('button', { name: 'Save: fixed' }).click();
+      await waitForScreen(page, 'summary');
+      await visible(page.getByText('Fixed', { exact: true }));
+      await snap(page, 'diagnosis-desktop-07-summary');
+
+      await page.getByRole('button', { name: 'Start a new diagnosis' }).click();
+      await pickSymptom(page, 'throttle-slow-to-return');
+      await page.getByText('Float-valve slide carburettor', { exact: true }).click();
+      await page.getByRole('button', { name: 'Show the likely causes' }).click();
+      await page.getByRole('button', { name: /^Start with:/ }).click();
+      await openCheck(page);
+      await record(page, 'Fault found');
+      await waitForScreen(page, 'stopped');
+      await snap(page, 'diagnosis-desktop-08-stop');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('"Save this case" after sign-up turns the quick diagnosis into a case, results and notes included', async () => {
+    const { context, page } = await newPage(browser, PHONE, 'dark');
+    try {
+      await page.goto(`${baseUrl}/diagnose`);
+      await pickSymptom(page, 'bog-on-acceleration');
+      await page.getByText('Pump-around slide carburettor', { exact: true }).click();
+      await page.getByText('Setup (optional)').click();
+      await page.getByLabel('Main jet').fill('185');
+      await page.getByRole('button', { name: 'Show the likely causes' }).click();
+      await page.getByRole('button', { name: /^Start with:/ }).click();
+      const { checkId } = await openCheck(page);
+      await record(page, 'Looks fine', 'snaps back every time');
+      await waitForScreen(page, 'ranking');
+      await page.getByRole('button', { name: 'Finish without a fix' }).click();
+      await page.getByText('Save this case').click();
+      await page.waitForURL(/\/sign-up\?next=%2Fdiagnose%2Fsave/, WAIT);
+
+      await page.getByLabel('Your name').fill(`Saver ${RUN}`);
+      await page.getByLabel('E-mail').fill(`saver-${RUN}@example.test`);
+      await page.getByLabel('Password', { exact: true }).fill('a-long-enough-password');
+      await page.getByRole('button', { name: 'Create account' }).click();
+      await page.waitForURL(/\/diagnose\/save$/, WAIT);
+      await visible(page.getByText('What will be saved'));
+      await visible(page.getByText('snaps back every time', { exact: false }));
+      await page.getByLabel('Kart name').fill(`Red ${RUN}`);
+      await page.getByLabel('Engine size (cc)').fill('125');
+      await snap(page, 'diagnosis-phone-09-save');
+      await page.getByRole('button', { name: 'Add the kart and save the case' }).click();
+      await page.waitForURL(/\/cases\/[^/]+\/walk-through$/, WAIT);
+      await waitForScreen(page, 'ranking');
+
+      const caseId = page.url().split('/cases/')[1].split('/')[0];
+      const saved = await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`);
+      expect(saved.status).toBe(200);
+      expect(saved.body.kartName).toBe(`Red ${RUN}`);
+      expect(saved.body.symptoms.map((s) => s.id)).toEqual(['bog-on-acceleration']);
+      expect(saved.body.setup).toMatchObject({ mainJet: 185, carburettorKind: 'pump-around' });
+      expect(saved.body.results.map((r) => [r.checkId, r.result, r.note])).toEqual([[checkId, 'looks-fine', 'snaps back every time']]);
+      // The quick diagnosis is no longer kept in this browser once it is a case.
+      expect(await page.evaluate(() => localStorage.getItem('fuelwright.diagnosis.quick'))).toBeNull();
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('the demo racer opens a case on "Blue 27", records a result, resolves it and finds it in the case list', async () => {
+    const { context, page } = await newPage(browser, PHONE, 'light');
+    try {
+      await page.goto(`${baseUrl}/sign-in`);
+      await page.fill('#sign-in-email', RACER.email);
+      await page.fill('#sign-in-password', RACER.password);
+      await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL(`${baseUrl}/home`, WAIT);
+
+      await page.goto(`${baseUrl}/cases`);
+      await page.getByText('Open a new case').click();
+      await page.waitForURL(/\/diagnose\/new/, WAIT);
+      await waitForScreen(page, 'intake');
+      const kartSelect = page.getByLabel('Kart', { exact: true });
+      const blue = await kartSelect.locator('option', { hasText: 'Blue 27' }).getAttribute('value');
+      await kartSelect.selectOption(blue!);
+      // The setup is filled in from the kart's latest snapshot, and stays editable.
+      await visible(page.getByText(/Filled in from the setup of/));
+      expect(await page.getByLabel('Main jet').inputValue()).not.toBe('');
+      await pickSymptom(page, 'hesitation');
+      await snap(page, 'diagnosis-case-phone-01-intake');
+      await page.getByRole('button', { name: 'Open the case and rank the causes' }).click();
+      await page.waitForURL(/\/cases\/[^/]+\/walk-through$/, WAIT);
+      await waitForScreen(page, 'ranking');
+      await expect.poll(() => page.getByText('Case on').innerText(), WAIT).toContain('Blue 27');
+      const caseId = page.url().split('/cases/')[1].split('/')[0];
+
+      await page.getByRole('button', { name: /^Start with:/ }).click();
+      const { checkId } = await openCheck(page);
+      // Reload mid-check: the place is restored and checked against the server's case.
+      await page.reload();
+      await waitForScreen(page, 'check');
+      expect((await screenOf(page)).state).toEqual({ check: 'steps' });
+      await record(page, 'Looks fine', 'checked twice');
+      await waitForScreen(page, 'ranking');
+      let dto = (await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
+      expect(dto.results.map((r) => [r.checkId, r.result, r.note])).toEqual([[checkId, 'looks-fine', 'checked twice']]);
+
+      await page.getByRole('button', { name: /say what fixed it/i }).click();
+      await waitForScreen(page, 'resolve');
+      const topCause = dto.rank.causes[0];
+      await page.locator('label').filter({ hasText: topCause.label }).first().click();
+      await page.getByLabel('What you did').fill('Cleaned and refitted it');
+      await page.getByRole('button', { name: 'Save: fixed' }).click();
+      await waitForScreen(page, 'summary');
+      await snap(page, 'diagnosis-case-phone-02-summary');
+      dto = (await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
+      expect(dto.state).toBe('resolved');
+      expect(dto.resolution).toMatchObject({ causeId: topCause.id, fix: 'Cleaned and refitted it' });
+
+      // The case list (the UI's page): the case is there, resolved.
+      await page.getByText('All cases', { exact: true }).click();
+      await page.waitForURL(/\/cases$/, WAIT);
+      const link = page.locator(`a[href$="/cases/${caseId}"]`).first();
+      await link.waitFor(WAIT);
+      const card = page.locator('.fw-case-card, tr').filter({ has: page.locator(`a[href$="/cases/${caseId}"]`) }).first();
+      await expect.poll(() => card.innerText(), WAIT).toContain('Blue 27');
+      await expect.poll(() => card.innerText(), WAIT).toContain('Resolved');
+      await snap(page, 'diagnosis-case-phone-03-case-list');
+
+      // A finished case's walk-through opens on its summary; the server refuses further steps (409).
+      await page.goto(`${baseUrl}/cases/${caseId}/walk-through`);
+      await waitForScreen(page, 'summary');
+      const refused = await api(page, 'POST', `/api/cases/${caseId}/results`, { checkId, result: 'fault-found' });
+      expect(refused.status).toBe(409);
+    } finally {
+      await context.close();
+    }
+  });
+});

@@ -1,0 +1,150 @@
+/**
+ * The quick diagnosis page wired to a fake API: cautions before steps, what is sent to the
+ * ranking, the bars with their numbers, a 400 shown under its field, and the place kept in this
+ * browser. The catalog and ranking below are neutral plumbing fixtures, not facts of the trade.
+ */
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import type { CatalogResponse, CheckResultValue, RankRequest, RankResponse } from '@fuelwright/shared';
+import { meReply, mockApi, renderApp, type ApiReply } from '../../../test-utils';
+import { QUICK_DIAGNOSIS_KEY } from '../hooks/walk-through-storage';
+
+const CAUTION = { id: 'k1', severity: 'caution' as const, title: 'Hot parts', text: 'Let them cool first.' };
+
+const CATALOG: CatalogResponse = {
+  version: 'test',
+  throttleBands: [{ id: 'closed', label: 'Closed band', circuit: 'circuit' }],
+  engineTemps: [{ id: 'warm', label: 'Warm engine' }],
+  trackPositions: [{ id: 'straight', label: 'Straight' }],
+  groups: [{ id: 'outside', label: 'Outside', openingMinutes: 0, steps: [], cautions: [] }],
+  symptoms: [{ id: 'sym-1', label: 'Symptom one', description: 'What symptom one looks like.', dimensions: ['where'], cautions: [] }],
+  causes: [
+    { id: 'cause-x', label: 'Cause X', description: '', prior: 0.1, fixes: [] },
+    { id: 'cause-y', label: 'Cause Y', description: '', prior: 0.1, fixes: [] },
+  ],
+  checks: [
+    {
+      id: 'check-a',
+      label: 'Check A',
+      group: 'outside',
+      minutes: 2,
+      cautions: [CAUTION],
+      steps: ['Step one of A.'],
+      tools: [],
+      record: [],
+      faultFoundMeans: 'A is bad.',
+      looksFineMeans: 'A is good.',
+      tests: [{ cause: 'cause-x', sensitivity: 0.8 }],
+      specificity: 0.9,
+      stopOnFault: false,
+    },
+  ],
+  fixes: [],
+  cautions: [CAUTION],
+  somethingElse: { label: 'Something else', prior: 0.1 },
+};
+
+function rankReply(results: Record<string, CheckResultValue> = {}): RankResponse {
+  const x = results['check-a'] === 'looks-fine' ? 0.2 : 0.6;
+  return {
+    version: 'test',
+    causes: [
+      { id: 'cause-x', label: 'Cause X', probability: x, prior: 0.1, logOdds: 0, reasons: [{ kind: 'rule', text: 'Because of symptom one', likelihoodRatio: 3, logOdds: 1.1 }], fixes: [] },
+      { id: 'cause-y', label: 'Cause Y', probability: 0.3, prior: 0.1, logOdds: 0, reasons: [], fixes: [] },
+    ],
+    somethingElse: { label: 'Something else', probability: 0.1 },
+    excluded: [],
+    plan: 'check-a' in results ? [] : [{ checkId: 'check-a', label: 'Check A', group: 'outside', minutes: 2, openingMinutes: 0, cautions: [CAUTION], findProbability: 0.5, causes: ['cause-x'], safetyFirst: false }],
+    expectedMinutes: 2,
+    cautions: [],
+  };
+}
+
+function fakeApi(rank: (body: RankRequest) => ApiReply) {
+  return mockApi({
+    'GET /auth/me': meReply(null),
+    'GET /catalog': { status: 200, body: CATALOG },
+    'POST /diagnosis/rank': (init) => rank(JSON.parse(String(init.body)) as RankRequest),
+  });
+}
+
+async function toRanking(user: ReturnType<typeof userEvent.setup>) {
+  await user.click(await screen.findByRole('checkbox', { name: /Symptom one/ }));
+  await user.click(screen.getByRole('button', { name: 'Straight' }));
+  await user.click(screen.getByRole('radio', { name: /Pump-around slide carburettor/ }));
+  await user.click(screen.getByRole('button', { name: 'Show the likely causes' }));
+  await screen.findByRole('heading', { name: 'Likely causes' });
+}
+
+describe('quick diagnosis page', () => {
+  it('ranks what was reported, shows bars with numbers, and the cautions before the steps', async () => {
+    const sent: RankRequest[] = [];
+    fakeApi((body) => {
+      sent.push(body);
+      return { status: 200, body: rankReply(body.results) };
+    });
+    const user = userEvent.setup();
+    renderApp('/diagnose');
+    await toRanking(user);
+    expect(sent[0]).toEqual({ symptoms: [{ id: 'sym-1', where: ['straight'] }], setup: { carburettorKind: 'pump-around' } });
+
+    const causes = screen.getByRole('list', { name: /Likely causes/ });
+    expect(within(causes).getByText('60%')).toBeInTheDocument();
+    // The bars are drawn for the eye; the number beside each is what is read out.
+    expect(within(causes).getAllByRole('progressbar', { hidden: true }).map((bar) => bar.getAttribute('aria-valuenow'))).toEqual(['60', '30']);
+    await user.click(within(causes).getByRole('button', { name: 'Why? (1)' }));
+    expect(screen.getByText('Because of symptom one')).toBeVisible();
+
+    await user.click(screen.getByRole('button', { name: 'Start with: Check A' }));
+    expect(await screen.findByText('Caution: Hot parts')).toBeInTheDocument();
+    expect(screen.queryByText('Step one of A.')).toBeNull();
+    expect(screen.queryByRole('radio', { name: 'Looks fine' })).toBeNull();
+    await user.click(screen.getByRole('button', { name: /I have read the cautions/ }));
+    expect(screen.getByText('Step one of A.')).toBeInTheDocument();
+
+    // Recording needs a result first.
+    await user.click(screen.getByRole('button', { name: 'Record the result' }));
+    expect(screen.getByText('Pick what you found first.')).toBeInTheDocument();
+    await user.click(screen.getByRole('radio', { name: 'Looks fine' }));
+    await user.type(screen.getByLabelText('Note (optional)'), 'all good');
+    await user.click(screen.getByRole('button', { name: 'Record the result' }));
+    expect(await screen.findByText('Result recorded')).toBeInTheDocument();
+    expect(sent[1].results).toEqual({ 'check-a': 'looks-fine' });
+    expect(within(screen.getByRole('list', { name: /Likely causes/ })).getByText('20%')).toBeInTheDocument();
+    expect(screen.getByText(/down 40 points/)).toBeInTheDocument();
+
+    // The place is kept in this browser for coming back.
+    const stored = JSON.parse(localStorage.getItem(QUICK_DIAGNOSIS_KEY)!) as { snapshot: { value: unknown } };
+    expect(stored.snapshot.value).toEqual({ ranking: 'idle' });
+  });
+
+  it('asks for a symptom and the carburettor before sending anything', async () => {
+    const sent: RankRequest[] = [];
+    fakeApi((body) => {
+      sent.push(body);
+      return { status: 200, body: rankReply() };
+    });
+    const user = userEvent.setup();
+    renderApp('/diagnose');
+    await user.click(await screen.findByRole('button', { name: 'Show the likely causes' }));
+    expect(screen.getByText('Pick at least one thing the engine does.')).toBeInTheDocument();
+    expect(screen.getByText(/Pick the kind of carburettor/)).toBeInTheDocument();
+    expect(sent).toHaveLength(0);
+  });
+
+  it('shows a 400 from the ranking under the setup field it names', async () => {
+    fakeApi(() => ({
+      status: 400,
+      body: { statusCode: 400, error: 'Bad Request', message: 'Invalid rank request: setup.premixRatio', fields: { 'setup.premixRatio': ['must be at most 100'] } },
+    }));
+    const user = userEvent.setup();
+    renderApp('/diagnose');
+    await user.click(await screen.findByRole('checkbox', { name: /Symptom one/ }));
+    await user.click(screen.getByRole('radio', { name: /Pump-around slide carburettor/ }));
+    await user.click(screen.getByRole('button', { name: 'Show the likely causes' }));
+    const premix = await screen.findByLabelText('Premix ratio (fuel to oil)');
+    await waitFor(() => expect(premix).toHaveAccessibleDescription('must be at most 100'));
+    expect(screen.getByRole('checkbox', { name: /Symptom one/ })).toBeChecked();
+  });
+});

@@ -1,0 +1,64 @@
+import { afterEach, describe, expect, it } from 'vitest';
+import { createActor } from 'xstate';
+import { walkThroughMachine } from '../machines/walk-through.machine';
+import { openCaseRequestFrom } from './use-save-quick-diagnosis';
+import { loadQuickDiagnosis, loadWalkThrough, QUICK_DIAGNOSIS_KEY, saveWalkThrough, WALK_THROUGH_STORAGE_VERSION } from './walk-through-storage';
+
+afterEach(() => localStorage.clear());
+
+function quickActor() {
+  const actor = createActor(walkThroughMachine, { input: { mode: 'quick', cautionCheckIds: [] } });
+  actor.start();
+  actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [{ id: 's1', where: ['straight'] }] });
+  actor.send({ type: 'INTAKE.CARBURETTOR', carburettorKind: 'pump-around' });
+  return actor;
+}
+
+describe('walk-through storage', () => {
+  it('keeps a snapshot and gives it back', () => {
+    const actor = quickActor();
+    saveWalkThrough(QUICK_DIAGNOSIS_KEY, actor.getPersistedSnapshot());
+    const loaded = loadWalkThrough(QUICK_DIAGNOSIS_KEY);
+    expect(loaded?.context.symptoms).toEqual([{ id: 's1', where: ['straight'] }]);
+    expect(loadQuickDiagnosis()?.carburettorKind).toBe('pump-around');
+  });
+
+  it('drops what does not fit: another version, broken JSON, a stopped actor', () => {
+    const actor = quickActor();
+    const snapshot = actor.getPersistedSnapshot();
+    localStorage.setItem(QUICK_DIAGNOSIS_KEY, JSON.stringify({ v: WALK_THROUGH_STORAGE_VERSION + 1, snapshot }));
+    expect(loadWalkThrough(QUICK_DIAGNOSIS_KEY)).toBeNull();
+    localStorage.setItem(QUICK_DIAGNOSIS_KEY, '{not json');
+    expect(loadWalkThrough(QUICK_DIAGNOSIS_KEY)).toBeNull();
+    actor.stop();
+    saveWalkThrough(QUICK_DIAGNOSIS_KEY, actor.getPersistedSnapshot());
+    expect(loadWalkThrough(QUICK_DIAGNOSIS_KEY)).toBeNull();
+  });
+});
+
+describe('saving a quick diagnosis as a case', () => {
+  it('sends the symptoms, the setup values given and every result with its note', () => {
+    const context = {
+      ...quickActor().getSnapshot().context,
+      setupDraft: { mainJet: '185', pilotJet: '' },
+      results: [
+        { checkId: 'c1', result: 'looks-fine' as const, note: 'fine' },
+        { checkId: 'c2', result: 'not-checked' as const, note: '' },
+      ],
+    };
+    expect(openCaseRequestFrom(context, 'kart-1')).toEqual({
+      kartId: 'kart-1',
+      symptoms: [{ id: 's1', where: ['straight'] }],
+      setup: { mainJet: 185 },
+      results: [
+        { checkId: 'c1', result: 'looks-fine', note: 'fine' },
+        { checkId: 'c2', result: 'not-checked' },
+      ],
+    });
+  });
+
+  it('leaves the setup to the kart when the visitor gave none', () => {
+    const context = quickActor().getSnapshot().context;
+    expect(openCaseRequestFrom(context, 'kart-1')).toEqual({ kartId: 'kart-1', symptoms: [{ id: 's1', where: ['straight'] }] });
+  });
+});

@@ -98,6 +98,19 @@ describe('cases over HTTP', () => {
     expect((await t.db.db.select().from(caseEvents)).length).toBe(events);
   });
 
+  it('turns today’s air into the density change since the last session that ran right', async () => {
+    const sessions = (await racer.get(`/api/karts/${kartId}/sessions`)).body.sessions as { ran: string; densityKgM3: number; sessionOn: string }[];
+    const baseline = sessions.filter((x) => x.ran === 'right').sort((a, b) => (a.sessionOn < b.sessionOn ? 1 : -1))[0];
+    const withAir: CaseDto = (await open(racer, { kartId, symptoms: ['lean-top-end'], conditions: { today: { densityKgM3: baseline.densityKgM3 * 1.08 } } })).body;
+    // Definition of the fact: 100 (today - baseline) / baseline (shared/src/air/README.md).
+    expect(withAir.conditions.densityChangePct).toBeCloseTo(8, 6);
+    expect(withAir.conditions.reference?.densityKgM3).toBeCloseTo(baseline.densityKgM3, 9);
+    const without: CaseDto = (await open(racer, { kartId, symptoms: ['lean-top-end'] })).body;
+    const p = (c: CaseDto) => c.rank.causes.find((x) => x.id === 'air-density-changed')?.probability ?? 0;
+    // Denser air leans a fixed jet (Heywood, Internal Combustion Engine Fundamentals, ch. 7): the cause must gain.
+    expect(p(withAir)).toBeGreaterThan(p(without));
+  });
+
   it('opens a case on a kart with no setup snapshot', async () => {
     const kart = (await racer.post('/api/karts').send({ name: 'Bare', displacementCc: 100, drive: 'direct-drive', carburettorKind: 'float-valve' })).body;
     const res = await open(racer, { kartId: kart.id, symptoms: ['hard-cold-start'] });

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { DiagnosisModule } from '../diagnosis/diagnosis.module.js';
+import { JettingModule } from '../jetting/jetting.module.js';
 import { CasesController } from './cases.controller.js';
 import { CaseRanking } from './case-ranking.js';
 import { CaseStore } from './case-store.js';
@@ -23,7 +24,7 @@ const handlers = [
 ];
 
 @Module({
-  imports: [DiagnosisModule],
+  imports: [DiagnosisModule, JettingModule],
   controllers: [CasesController],
   providers: [CaseStore, CaseRanking, CaseAudience, ...handlers],
   exports: [CaseStore, CaseRanking, CaseAudience],

@@ -10,6 +10,7 @@ import { findKart } from '../../karts/kart-row.js';
 import { CaseRanking } from '../case-ranking.js';
 import { CaseStore, type NewCaseEvent } from '../case-store.js';
 import { OpenCaseCommand } from './open-case.command.js';
+import { AirDensityBaseline } from '../../jetting/air-density-baseline.js';
 
 @CommandHandler(OpenCaseCommand)
 export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
@@ -18,6 +19,7 @@ export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
     private readonly access: AccessPolicy,
     private readonly ranking: CaseRanking,
     private readonly store: CaseStore,
+    private readonly airBaseline: AirDensityBaseline,
   ) {}
 
   async execute({ user, input }: OpenCaseCommand) {
@@ -28,7 +30,13 @@ export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
     }
     this.access.require(user, kart, 'edit', 'kart');
     const setup: SetupSnapshot = { ...(input.setup ?? (await this.latestSetup(kart.id))), carburettorKind: kart.carburettorKind };
-    const conditions = input.conditions ?? {};
+    let conditions = input.conditions ?? {};
+    // Today's air against the last jetting-log session that ran right: the fact behind "air density changed".
+    if (conditions.densityChangePct === undefined && conditions.today?.densityKgM3) {
+      const day = await this.airBaseline.baselineOf(kart.id);
+      const pct = await this.airBaseline.densityChangeSince(kart.id, conditions.today.densityKgM3);
+      if (day && pct !== null) conditions = { ...conditions, densityChangePct: pct, reference: { ...conditions.reference, densityKgM3: day.densityKgM3 } };
+    }
     const symptoms = input.symptoms.map((s) => (typeof s === 'string' ? { id: s } : s));
     const version = this.ranking.currentVersion;
 

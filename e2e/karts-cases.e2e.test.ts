@@ -30,9 +30,19 @@ async function snap(page: Page, name: string): Promise<void> {
   await snapPage(page, name);
 }
 
+/** Closes the toasts that would cover a part of the page. */
+async function dismissToasts(page: Page): Promise<void> {
+  const close = page.getByRole('button', { name: 'Close', exact: true });
+  for (let n = await close.count(); n > 0; n = await close.count()) {
+    await close.first().click();
+    await expect.poll(() => close.count(), POLL).toBeLessThan(n);
+  }
+}
+
 /** A screenshot of one part of the page. */
 async function snapPart(locator: Locator, name: string): Promise<void> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await dismissToasts(locator.page());
   await locator.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
 }
 

@@ -33,9 +33,11 @@ export function ChoiceField<T extends string>({
     ) : undefined;
   return (
     <FormGroup label={label} labelFor={id} intent={invalid ? 'danger' : 'none'} helperText={helper}>
-      <div id={id} className={invalid ? 'fw-choice fw-choice-invalid' : 'fw-choice'} aria-invalid={invalid || undefined}>
+      <div id={id} className={invalid ? 'fw-choice fw-choice-invalid' : 'fw-choice'}>
         <SegmentedControl
           aria-label={typeof label === 'string' ? label : undefined}
+          aria-describedby={helper ? `${id}-help` : undefined}
+          aria-invalid={invalid || undefined}
           size="large"
           fill
           disabled={disabled}

@@ -18,6 +18,7 @@ import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
 import { isApiError } from '../../../lib/api-client';
+import { useCurrentUser } from '../../../lib/current-user';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import { useDeleteKart } from '../api/delete-kart';
 import { useKart } from '../api/get-kart';
@@ -117,6 +118,7 @@ function DeleteKartAlert({ kart, setupCount, isOpen, onClose }: { kart: KartDto;
 /** One kart: its facts (edit, delete), the way into a diagnosis, and its setups. */
 export function KartPage() {
   const { kartId = '' } = useParams();
+  const viewer = useCurrentUser();
   const kart = useKart(kartId);
   const setups = useSetups(kartId);
   const phone = useMediaQuery(PHONE_QUERY);
@@ -144,9 +146,11 @@ export function KartPage() {
   }
 
   const k = kart.data;
+  // A coach or shop the kart is shared with reads it; only its owner changes it.
+  const owner = viewer?.id === k.ownerId;
   const list = setups.data ?? [];
   const latest = list[0];
-  const showForm = recording || (setups.isSuccess && list.length === 0);
+  const showForm = owner && (recording || (setups.isSuccess && list.length === 0));
 
   return (
     <Page
@@ -157,25 +161,29 @@ export function KartPage() {
       }
       lead={`${k.displacementCc} cc two-stroke · ${DRIVE_LABELS[k.drive]} · ${CARBURETTOR_KIND_LABELS[k.carburettorKind]}`}
       actions={
-        <LinkButton
-          className="fw-touch"
-          size="large"
-          intent="primary"
-          icon={<DiagnosisIcon />}
-          to={`${paths.diagnoseKart}?kartId=${encodeURIComponent(k.id)}`}
-          text="Diagnose this kart"
-        />
+        owner ? (
+          <LinkButton
+            className="fw-touch"
+            size="large"
+            intent="primary"
+            icon={<DiagnosisIcon />}
+            to={`${paths.diagnoseKart}?kartId=${encodeURIComponent(k.id)}`}
+            text="Diagnose this kart"
+          />
+        ) : undefined
       }
     >
-      <p className="fw-back-link">
-        <Link to={paths.karts}>← My karts</Link>
-      </p>
+      {owner && (
+        <p className="fw-back-link">
+          <Link to={paths.karts}>← My karts</Link>
+        </p>
+      )}
       <Card className="fw-form-card" aria-labelledby="kart-about-title">
         <div className="fw-section-head">
           <H2 id="kart-about-title" className="fw-section-title">
             {editing ? 'Edit kart' : 'About this kart'}
           </H2>
-          {!editing && (
+          {!editing && owner && (
             <div className="fw-section-actions">
               <Button className="fw-touch" size="large" icon={<EditIcon />} text="Edit" onClick={() => setEditing(true)} />
               <Button
@@ -192,13 +200,15 @@ export function KartPage() {
         </div>
         {editing ? <EditKart kart={k} onDone={() => setEditing(false)} /> : <KartFacts kart={k} />}
         <div className="fw-link-row">
-          <LinkButton
-            className="fw-touch"
-            variant="minimal"
-            icon={<FolderOpenIcon />}
-            to={`${paths.cases}?kartId=${encodeURIComponent(k.id)}`}
-            text="Cases on this kart"
-          />
+          {owner && (
+            <LinkButton
+              className="fw-touch"
+              variant="minimal"
+              icon={<FolderOpenIcon />}
+              to={`${paths.cases}?kartId=${encodeURIComponent(k.id)}`}
+              text="Cases on this kart"
+            />
+          )}
           <LinkButton
             className="fw-touch"
             variant="minimal"
@@ -215,7 +225,7 @@ export function KartPage() {
           <H2 id="setups-title" className="fw-section-title">
             Setups
           </H2>
-          {!showForm && setups.isSuccess && (
+          {owner && !showForm && setups.isSuccess && (
             <Button className="fw-touch" size="large" intent="primary" icon={<AddIcon />} text="Record a setup" onClick={() => setRecording(true)} />
           )}
         </div>
@@ -240,7 +250,9 @@ export function KartPage() {
             description={setups.error.message}
             action={<Button size="large" text="Try again" onClick={() => void setups.refetch()} />}
           />
-        ) : list.length === 0 ? null : (
+        ) : list.length === 0 ? (
+          !owner && <p className="fw-muted">No setups recorded yet.</p>
+        ) : (
           <>
             <p className="fw-muted fw-section-lead">Newest first. What changed against the setup before is highlighted.</p>
             {phone ? <SetupCards setups={list} /> : <SetupsTable setups={list} />}

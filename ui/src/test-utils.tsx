@@ -14,6 +14,7 @@ export function makeUser(role: Role, overrides: Partial<UserDto> = {}): UserDto 
     email: `${role}@example.test`,
     displayName: `Test ${role}`,
     role,
+    emailVerified: true,
     createdAt: '2026-01-15T10:00:00.000Z',
     ...overrides,
   };

@@ -12,7 +12,7 @@ const SHOWS: Record<Role | 'visitor', string[]> = {
   visitor: ['Quick diagnosis'],
   racer: ['Home', 'Karts', 'Cases', 'Quick diagnosis'],
   coach: ['Home', 'Shared cases', 'Quick diagnosis'],
-  shop: ['Home', 'Work orders', 'Outcomes', 'Quick diagnosis'],
+  shop: ['Home', 'Shared cases', 'Work orders', 'Outcomes', 'Quick diagnosis'],
   admin: ['Home', 'Users', 'Outcomes', 'Rulesets', 'Quick diagnosis'],
 };
 const ROLE_ONLY = ['Home', 'Karts', 'Cases', 'Shared cases', 'Work orders', 'Outcomes', 'Users', 'Rulesets'];

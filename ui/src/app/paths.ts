@@ -12,6 +12,13 @@ export const paths = {
   conditions: '/conditions',
   signIn: '/sign-in',
   signUp: '/sign-up',
+  /** The link in an invitation e-mail: sign in or sign up, then accept (see invitationPath()). */
+  invitation: '/invitations/:token',
+  /** Links in account e-mails, each with `?token=`; the reset page without one asks for the address. */
+  verifyEmail: '/verify-email',
+  resetPassword: '/reset-password',
+  unsubscribe: '/unsubscribe',
+  emailSettings: '/account/e-mails',
   home: '/home',
   // racer
   karts: '/karts',
@@ -29,6 +36,7 @@ export const paths = {
   // admin
   users: '/admin/users',
   rulesets: '/admin/rulesets',
+  outbox: '/admin/outbox',
 } as const;
 
 export type AppPath = (typeof paths)[keyof typeof paths];
@@ -61,4 +69,17 @@ export function signUpPath(next?: string | null): string {
 /** The jetting screen of one kart. */
 export function kartJettingPath(kartId: string): string {
   return paths.kartJetting.replace(':kartId', encodeURIComponent(kartId));
+}
+
+/** The sign-up page's query parameter that carries an invitation token. */
+export const INVITATION_PARAM = 'invitation';
+
+/** The page of one invitation link. */
+export function invitationPath(token: string): string {
+  return paths.invitation.replace(':token', encodeURIComponent(token));
+}
+
+/** Sign-up through an invitation: the token goes along, and the shared cases open afterwards. */
+export function invitationSignUpPath(token: string): string {
+  return `${paths.signUp}?${INVITATION_PARAM}=${encodeURIComponent(token)}&${NEXT_PARAM}=${encodeURIComponent(paths.sharedCases)}`;
 }

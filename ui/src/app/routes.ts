@@ -1,4 +1,4 @@
-import type { ComponentType } from 'react';
+import { createElement, lazy, Suspense, type ComponentProps, type ComponentType } from 'react';
 import {
   BookIcon,
   CloudIcon,
@@ -7,9 +7,11 @@ import {
   DiagnosisIcon,
   DriveTimeIcon,
   EndorsedIcon,
+  EnvelopeIcon,
   FolderOpenIcon,
   FolderSharedIcon,
   HomeIcon,
+  NotificationsIcon,
   PeopleIcon,
   type SVGIconProps,
 } from '@blueprintjs/icons';
@@ -111,15 +113,25 @@ export const appRoutes: readonly AppRoute[] = [
     path: paths.case,
     title: 'Case',
     access: 'signed-in',
-    page: () => import('../features/cases/components/case-page').then((m) => m.CasePage),
+    // The app composes two features: the case page shows the review panels it is handed. They load
+    // beside the page (not before it), so the case shows first.
+    page: () => {
+      const review = import('../features/review/components/case-review');
+      const CaseReview = lazy(() => review.then((m) => ({ default: m.CaseReview })));
+      const Review = (props: ComponentProps<typeof CaseReview>) => createElement(Suspense, { fallback: null }, createElement(CaseReview, props));
+      return import('../features/cases/components/case-page').then(
+        ({ CasePage }) =>
+          function CaseWithReview() {
+            return createElement(CasePage, { review: Review });
+          },
+      );
+    },
   },
   {
     path: paths.sharedCases,
     title: 'Shared cases',
-    access: ['coach'],
-    page: comingNextPage,
-    comingNext:
-      'Cases your racers share with you: review them, comment, ask for a photo and recommend the next check.',
+    access: ['coach', 'shop'],
+    page: () => import('../features/review/components/shared-cases-page').then((m) => m.SharedCasesPage),
     menu: { icon: FolderSharedIcon, order: 20 },
   },
   {
@@ -186,5 +198,43 @@ export const appRoutes: readonly AppRoute[] = [
     title: 'Walk-through',
     access: ['racer'],
     page: () => import('../features/diagnosis/components/case-walk-through-page').then((m) => m.CaseWalkThroughPage),
+  },
+  {
+    path: paths.invitation,
+    title: 'Invitation',
+    access: 'anyone',
+    page: () => import('../features/account/components/invitation-page').then((m) => m.InvitationPage),
+  },
+  {
+    path: paths.verifyEmail,
+    title: 'Confirm your e-mail address',
+    access: 'anyone',
+    page: () => import('../features/account/components/verify-email-page').then((m) => m.VerifyEmailPage),
+  },
+  {
+    path: paths.resetPassword,
+    title: 'Reset password',
+    access: 'anyone',
+    page: () => import('../features/account/components/reset-password-page').then((m) => m.ResetPasswordPage),
+  },
+  {
+    path: paths.unsubscribe,
+    title: 'Stop these e-mails',
+    access: 'anyone',
+    page: () => import('../features/account/components/unsubscribe-page').then((m) => m.UnsubscribePage),
+  },
+  {
+    path: paths.emailSettings,
+    title: 'E-mail settings',
+    access: 'signed-in',
+    page: () => import('../features/account/components/email-settings-page').then((m) => m.EmailSettingsPage),
+    menu: { icon: NotificationsIcon, order: 85, label: 'E-mails' },
+  },
+  {
+    path: paths.outbox,
+    title: 'Outbox',
+    access: ['admin'],
+    page: () => import('../features/admin-outbox/components/outbox-page').then((m) => m.OutboxPage),
+    menu: { icon: EnvelopeIcon, order: 45 },
   },
 ];

@@ -95,7 +95,10 @@ async function readJson(response: Response): Promise<unknown> {
 export async function apiRequest<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   const init: RequestInit = { method, credentials: 'same-origin', headers, signal: options.signal };
-  if (options.body !== undefined) {
+  if (options.body instanceof FormData) {
+    // Multipart (a photo upload): the browser sets the Content-Type with its boundary.
+    init.body = options.body;
+  } else if (options.body !== undefined) {
     headers['Content-Type'] = 'application/json';
     init.body = JSON.stringify(options.body);
   }

@@ -75,6 +75,8 @@ export function SignInPage() {
           />
         </form>
         <p className="fw-form-links">
+          <Link to={paths.resetPassword}>Forgot your password?</Link>
+          <br />
           New here? <Link to={signUpPath(next)}>Create an account</Link>
           <br />
           No account needed for a <Link to={paths.quickDiagnosis}>quick diagnosis</Link>.

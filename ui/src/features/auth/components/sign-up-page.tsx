@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Button, Callout, Card } from '@blueprintjs/core';
 import { NewPersonIcon } from '@blueprintjs/icons';
-import { Link } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { DISPLAY_NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@fuelwright/shared';
-import { signInPath } from '../../../app/paths';
+import { INVITATION_PARAM, invitationPath, signInPath } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PasswordField } from '../../../components/password-field';
 import { TextField } from '../../../components/text-field';
@@ -20,16 +20,24 @@ export function SignUpPage() {
   const [password, setPassword] = useState('');
   const signUp = useSignUp();
   const next = useNextPath();
+  // Signing up through an invitation link: the account gets the invited role and the share.
+  const invitationToken = useSearchParams()[0].get(INVITATION_PARAM) || undefined;
   const errors = formErrors(signUp.error, FIELDS);
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
-    signUp.mutate({ displayName: displayName.trim(), email: email.trim(), password });
+    signUp.mutate({ displayName: displayName.trim(), email: email.trim(), password, ...(invitationToken ? { invitationToken } : {}) });
   };
 
   return (
     <Page narrow title="Create account" lead="Keep your karts, setups and cases in one place.">
       <Card className="fw-form-card">
+        {invitationToken && (
+          <Callout className="fw-form-note" intent="primary" compact>
+            You were invited to review a case. Use the address the invitation was sent to: the account becomes a coach or shop
+            account, with the shared case ready.
+          </Callout>
+        )}
         <form onSubmit={submit} noValidate aria-label="Create account">
           <TextField
             id="sign-up-name"
@@ -79,11 +87,17 @@ export function SignUpPage() {
             loading={signUp.isPending}
           />
         </form>
-        <p className="fw-form-links">
-          New accounts are racer accounts. Coaches and shops: an admin sets your role after you sign up.
-          <br />
-          Already have an account? <Link to={signInPath(next)}>Sign in</Link>
-        </p>
+        {invitationToken ? (
+          <p className="fw-form-links">
+            Already have an account? <Link to={signInPath(invitationPath(invitationToken))}>Sign in and accept</Link>
+          </p>
+        ) : (
+          <p className="fw-form-links">
+            New accounts are racer accounts. Coaches and shops: an admin sets your role after you sign up.
+            <br />
+            Already have an account? <Link to={signInPath(next)}>Sign in</Link>
+          </p>
+        )}
       </Card>
     </Page>
   );

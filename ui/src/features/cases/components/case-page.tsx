@@ -1,6 +1,7 @@
-import { useState, type ReactNode } from 'react';
+import { useState, type ComponentType, type ReactNode } from 'react';
 import { Button, Callout, Card, H2, NonIdealState, Tag, type Intent } from '@blueprintjs/core';
-import { ArrowDownIcon, ArrowUpIcon, DisableIcon, EndorsedIcon, ErrorIcon, FolderOpenIcon, PlayIcon } from '@blueprintjs/icons';
+import { ArrowDownIcon, ArrowUpIcon, DisableIcon, EndorsedIcon, ErrorIcon, FolderOpenIcon, PlayIcon, ThumbsUpIcon } from '@blueprintjs/icons';
+import { useQueryClient } from '@tanstack/react-query';
 import { generatePath, Link, useParams } from 'react-router-dom';
 import {
   CHECK_RESULT_LABELS,
@@ -18,8 +19,9 @@ import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { isApiError } from '../../../lib/api-client';
+import { useCurrentUser } from '../../../lib/current-user';
 import { formatSetupValue, SETUP_FIELD_LABELS } from '../../../lib/setup-fields';
-import { useCase } from '../api/get-case';
+import { caseQueryKey, useCase } from '../api/get-case';
 import { useCatalog } from '../api/get-catalog';
 import { catalogLabels, type CatalogLabels } from '../lib/catalog-labels';
 import { conditionLines } from '../lib/conditions';
@@ -196,9 +198,21 @@ function SetupAtTheTime({ c }: { c: CaseDto }) {
   );
 }
 
-/** One case: what was noticed, the setup and conditions, the ranking now, every check, how it ended, and the timeline. */
-export function CasePage() {
+/** What the case page hands to the review panels the app gives it (comments, photos, sharing). */
+export interface CaseReviewSlotProps {
+  c: CaseDto;
+  checkLabel: (checkId: string) => string;
+  onCase: (c: CaseDto) => void;
+}
+
+/**
+ * One case: what was noticed, the setup and conditions, the ranking now, every check, how it ended,
+ * and the timeline. Only the owner changes the facts; a coach or shop it is shared with reads them.
+ */
+export function CasePage({ review: Review }: { review?: ComponentType<CaseReviewSlotProps> }) {
   const { caseId = '' } = useParams();
+  const viewer = useCurrentUser();
+  const queryClient = useQueryClient();
   const query = useCase(caseId);
   const catalog = useCatalog();
   const [abandoning, setAbandoning] = useState(false);
@@ -214,7 +228,11 @@ export function CasePage() {
         description={missing ? 'It may belong to someone else, or its kart was deleted.' : query.error.message}
         action={
           missing ? (
-            <LinkButton className="fw-touch" size="large" to={paths.cases} text="Back to cases" />
+            viewer?.role === 'coach' || viewer?.role === 'shop' ? (
+              <LinkButton className="fw-touch" size="large" to={paths.sharedCases} text="Back to shared cases" />
+            ) : (
+              <LinkButton className="fw-touch" size="large" to={paths.cases} text="Back to cases" />
+            )
           ) : (
             <Button size="large" text="Try again" onClick={() => void query.refetch()} />
           )
@@ -225,6 +243,7 @@ export function CasePage() {
 
   const c = query.data;
   const open = c.state === 'open';
+  const owner = viewer?.id === c.ownerId;
   const names = new Map(c.events.filter((e) => e.actorId).map((e) => [e.actorId!, e.actorName]));
   const actor = (id: string) => names.get(id) ?? 'Someone';
   const nextCheck = open ? c.rank.plan[0] : undefined;
@@ -243,7 +262,7 @@ export function CasePage() {
         </span>
       }
       actions={
-        open ? (
+        open && owner ? (
           <>
             <LinkButton
               className="fw-touch"
@@ -258,10 +277,16 @@ export function CasePage() {
         ) : undefined
       }
     >
-      <p className="fw-back-link">
-        <Link to={paths.cases}>← Cases</Link> ·{' '}
-        <Link to={generatePath(paths.kart, { kartId: c.kartId })}>{c.kartName}</Link>
-      </p>
+      {owner ? (
+        <p className="fw-back-link">
+          <Link to={paths.cases}>← Cases</Link> ·{' '}
+          <Link to={generatePath(paths.kart, { kartId: c.kartId })}>{c.kartName}</Link>
+        </p>
+      ) : (
+        <p className="fw-back-link">
+          <Link to={paths.sharedCases}>← Shared cases</Link> · {c.ownerName}’s case, shared with you to review: you cannot change its facts.
+        </p>
+      )}
       <Outcome c={c} labels={labels} actor={actor} />
       {open && c.rank.cautions.map((caution) => (
         <CautionCallout key={caution.id} kind={caution.severity} title={`${caution.severity === 'stop' ? 'Stop' : 'Caution'}: ${caution.title}`}>
@@ -275,6 +300,13 @@ export function CasePage() {
             (about {nextCheck.minutes + nextCheck.openingMinutes} min; {c.rank.plan.length} {c.rank.plan.length === 1 ? 'check' : 'checks'} in the plan)
           </span>
         </p>
+      )}
+      {nextCheck?.recommendation && (
+        <Callout intent="primary" icon={<ThumbsUpIcon size={20} />} compact>
+          <span className="fw-break-word">
+            Recommended by <strong>{nextCheck.recommendation.byName}</strong>: {nextCheck.recommendation.reason}
+          </span>
+        </Callout>
       )}
 
       <div className="fw-case-grid">
@@ -341,7 +373,14 @@ export function CasePage() {
           </p>
         </div>
       </div>
-      {open && <AbandonCaseDialog caseId={c.id} isOpen={abandoning} onClose={() => setAbandoning(false)} />}
+      {Review && (
+        <Review
+          c={c}
+          checkLabel={labels.check}
+          onCase={(changed) => queryClient.setQueryData(caseQueryKey(changed.id), changed)}
+        />
+      )}
+      {open && owner && <AbandonCaseDialog caseId={c.id} isOpen={abandoning} onClose={() => setAbandoning(false)} />}
     </Page>
   );
 }

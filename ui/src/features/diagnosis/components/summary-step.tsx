@@ -44,9 +44,11 @@ export function SummaryStep({
         </Callout>
       ) : (
         <Callout intent="none" title={ctx.caseState === 'abandoned' ? 'Closed without a fix' : 'Finished without a fix'}>
-          {ctx.mode === 'quick'
-            ? 'Nothing was found in the checks done. Save the case to come back to it, or ask a qualified engine builder.'
-            : 'The case is closed; every result stays on record.'}
+          {ctx.mode === 'case'
+            ? 'The case is closed; every result stays on record.'
+            : ctx.results.some((r) => r.result === 'fault-found')
+              ? 'A fault was found, but no fix was recorded. Save the case to come back to it, or ask a qualified engine builder.'
+              : 'Nothing was found in the checks done. Save the case to come back to it, or ask a qualified engine builder.'}
         </Callout>
       )}
 

@@ -397,6 +397,19 @@ describe('walk-through machine, quick mode', () => {
     expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
   });
 
+  it('back from the causes after the first result opens that check again', async () => {
+    const h = harness();
+    const actor = await quickAtRanking(h);
+    // Nothing recorded yet: Back from the causes goes nowhere.
+    actor.send({ type: 'CHECK.BACK' });
+    expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
+    actor.send({ type: 'CHECKS.START' });
+    await record(actor, 'looks-fine');
+    actor.send({ type: 'CHECK.BACK' });
+    expect(actor.getSnapshot().value).toEqual({ check: 'steps' });
+    expect(current(actor)).toBe('check-a');
+  });
+
   it('skip: moves the check to the end of the plan for now and keeps the skipped ids', async () => {
     const h = harness();
     const actor = await quickAtRanking(h);

@@ -252,6 +252,7 @@ export const walkThroughMachine = setup({
     intakeInvalid: ({ context }) => Object.keys(intakeErrors(context)).length > 0,
     hasNextCheck: ({ context }) => nextCheckId(context.rank, context.skipped) !== null,
     hasPreviousCheck: ({ context }) => previousCheckId(context.results, context.currentCheckId) !== null,
+    hasRecordedCheck: ({ context }) => context.results.length > 0,
     needsAcknowledgement: ({ context }) => {
       const id = context.currentCheckId;
       if (id === null || context.acknowledged.includes(id)) return false;
@@ -509,8 +510,9 @@ export const walkThroughMachine = setup({
             },
             'INTAKE.EDIT': { target: '#walkThrough.intake', actions: 'clearError' },
             'RESOLVE.START': { target: '#walkThrough.resolve', actions: 'clearError' },
+            // From the causes, Back opens the check recorded last.
             'CHECK.BACK': {
-              guard: 'hasPreviousCheck',
+              guard: 'hasRecordedCheck',
               target: '#walkThrough.check',
               actions: assign({ currentCheckId: ({ context }) => previousCheckId(context.results, null), error: null }),
             },

@@ -13,6 +13,7 @@ export function menuItemsFor(user: UserDto | null, routes: readonly AppRoute[] =
   return routes
     .filter((route): route is AppRoute & { menu: NonNullable<AppRoute['menu']> } => route.menu !== undefined)
     .filter((route) => showsInMenu(route.access, user))
+    .filter((route) => !route.menu.roles || (user !== null && route.menu.roles.includes(user.role)))
     .sort((a, b) => a.menu.order - b.menu.order)
     .map((route) => ({ path: route.path, label: route.menu.label ?? route.title, icon: route.menu.icon }));
 }

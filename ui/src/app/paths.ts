@@ -32,10 +32,16 @@ export const paths = {
   sharedCases: '/shared-cases',
   // shop
   workOrders: '/work-orders',
+  newWorkOrder: '/work-orders/new',
+  workOrder: '/work-orders/:workOrderId',
   outcomes: '/outcomes',
+  // shop and admin
+  insights: '/insights',
   // admin
   users: '/admin/users',
   rulesets: '/admin/rulesets',
+  /** One proposal of new weights (shops propose too; only admins publish). */
+  rulesetProposal: '/admin/rulesets/proposals/:proposalId',
   outbox: '/admin/outbox',
 } as const;
 

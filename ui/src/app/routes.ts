@@ -1,6 +1,7 @@
 import { createElement, lazy, Suspense, type ComponentProps, type ComponentType } from 'react';
 import {
   BookIcon,
+  ChartIcon,
   CloudIcon,
   FilterIcon,
   ClipboardIcon,
@@ -15,6 +16,7 @@ import {
   PeopleIcon,
   type SVGIconProps,
 } from '@blueprintjs/icons';
+import type { Role } from '@fuelwright/shared';
 import type { Access } from './access';
 import { paths } from './paths';
 
@@ -26,6 +28,8 @@ export interface MenuEntry {
   icon: IconComponent;
   /** Position in the menu, lowest first. */
   order: number;
+  /** Only these roles see the entry (default: everyone who may open the route). */
+  roles?: readonly Role[];
 }
 
 /** Data a page can read through `useMatches()` (title, and what a placeholder page says). */
@@ -43,8 +47,6 @@ export interface AppRoute extends RouteHandle {
   /** Present when the route has a menu entry; the entry shows only to those who may open it. */
   menu?: MenuEntry;
 }
-
-const comingNextPage = () => import('./pages/coming-next-page').then((m) => m.ComingNextPage);
 
 /**
  * Every screen of the app. The router, the route guards and the navigation menu are all built
@@ -119,10 +121,13 @@ export const appRoutes: readonly AppRoute[] = [
       const review = import('../features/review/components/case-review');
       const CaseReview = lazy(() => review.then((m) => ({ default: m.CaseReview })));
       const Review = (props: ComponentProps<typeof CaseReview>) => createElement(Suspense, { fallback: null }, createElement(CaseReview, props));
+      const outcome = import('../features/outcomes/components/log-outcome-panel');
+      const LogOutcomePanel = lazy(() => outcome.then((m) => ({ default: m.LogOutcomePanel })));
+      const LogOutcome = (props: ComponentProps<typeof LogOutcomePanel>) => createElement(Suspense, { fallback: null }, createElement(LogOutcomePanel, props));
       return import('../features/cases/components/case-page').then(
         ({ CasePage }) =>
           function CaseWithReview() {
-            return createElement(CasePage, { review: Review });
+            return createElement(CasePage, { review: Review, logOutcome: LogOutcome });
           },
       );
     },
@@ -138,18 +143,34 @@ export const appRoutes: readonly AppRoute[] = [
     path: paths.workOrders,
     title: 'Work orders',
     access: ['shop'],
-    page: comingNextPage,
-    comingNext: "Customers' karts in for work, with the case that brought each one in.",
+    page: () => import('../features/outcomes/components/work-orders-page').then((m) => m.WorkOrdersPage),
     menu: { icon: ClipboardIcon, order: 20 },
+  },
+  {
+    path: paths.newWorkOrder,
+    title: 'New work order',
+    access: ['shop'],
+    page: () => import('../features/outcomes/components/new-work-order-page').then((m) => m.NewWorkOrderPage),
+  },
+  {
+    path: paths.workOrder,
+    title: 'Work order',
+    access: ['shop'],
+    page: () => import('../features/outcomes/components/work-order-page').then((m) => m.WorkOrderPage),
   },
   {
     path: paths.outcomes,
     title: 'Outcomes',
     access: ['shop', 'admin'],
-    page: comingNextPage,
-    comingNext:
-      'What was really wrong and what fixed it: the cause, the fix, labour minutes, parts, and whether it stayed fixed.',
+    page: () => import('../features/outcomes/components/outcomes-page').then((m) => m.OutcomesPage),
     menu: { icon: EndorsedIcon, order: 30 },
+  },
+  {
+    path: paths.insights,
+    title: 'Insights',
+    access: ['shop', 'admin'],
+    page: () => import('../features/insights/components/insights-page').then((m) => m.InsightsPage),
+    menu: { icon: ChartIcon, order: 35 },
   },
   {
     path: paths.users,
@@ -161,11 +182,16 @@ export const appRoutes: readonly AppRoute[] = [
   {
     path: paths.rulesets,
     title: 'Rulesets',
-    access: ['admin'],
-    page: comingNextPage,
-    comingNext:
-      'Versions of the knowledge base (symptoms, causes, checks, cautions and rule weights): publish a new one or roll back.',
-    menu: { icon: BookIcon, order: 40 },
+    // Shops propose new weights here (reached from Insights); only admins publish, so only they get a menu entry.
+    access: ['shop', 'admin'],
+    page: () => import('../features/rulesets/components/rulesets-page').then((m) => m.RulesetsPage),
+    menu: { icon: BookIcon, order: 40, roles: ['admin'] },
+  },
+  {
+    path: paths.rulesetProposal,
+    title: 'Proposal',
+    access: ['shop', 'admin'],
+    page: () => import('../features/rulesets/components/proposal-page').then((m) => m.ProposalPage),
   },
   {
     path: paths.conditions,

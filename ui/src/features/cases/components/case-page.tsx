@@ -205,11 +205,23 @@ export interface CaseReviewSlotProps {
   onCase: (c: CaseDto) => void;
 }
 
+/** What the case page hands to the outcome panel the app gives it. */
+export interface CaseOutcomeSlotProps {
+  c: CaseDto;
+}
+
 /**
  * One case: what was noticed, the setup and conditions, the ranking now, every check, how it ended,
  * and the timeline. Only the owner changes the facts; a coach or shop it is shared with reads them.
  */
-export function CasePage({ review: Review }: { review?: ComponentType<CaseReviewSlotProps> }) {
+export function CasePage({
+  review: Review,
+  logOutcome: LogOutcome,
+}: {
+  review?: ComponentType<CaseReviewSlotProps>;
+  /** The "log what really fixed it" panel the app gives the page (it decides who sees it). */
+  logOutcome?: ComponentType<CaseOutcomeSlotProps>;
+}) {
   const { caseId = '' } = useParams();
   const viewer = useCurrentUser();
   const queryClient = useQueryClient();
@@ -308,6 +320,7 @@ export function CasePage({ review: Review }: { review?: ComponentType<CaseReview
           </span>
         </Callout>
       )}
+      {LogOutcome && <LogOutcome c={c} />}
 
       <div className="fw-case-grid">
         <div className="fw-case-column">

@@ -1,0 +1,46 @@
+import { Button, FormGroup, HTMLSelect } from '@blueprintjs/core';
+import { TextField } from '../../../components/text-field';
+import type { PeriodFilter as Filter } from '../lib/period';
+
+/**
+ * From, to and ruleset version. Each change applies at once (the page keeps the filter in its
+ * address, so it survives a reload and can be shared).
+ */
+export function PeriodFilter({
+  value,
+  onChange,
+  versions,
+  allVersionsLabel = 'All versions',
+  idPrefix = 'period',
+}: {
+  value: Filter;
+  onChange: (next: Filter) => void;
+  versions: readonly { version: string; active: boolean }[];
+  allVersionsLabel?: string;
+  idPrefix?: string;
+}) {
+  const set = (key: keyof Filter, v: string) => onChange({ ...value, [key]: v || undefined });
+  const invalid = value.from && value.to && value.from > value.to ? ['The first day comes after the last.'] : [];
+  return (
+    <div className="fw-ins-filters" role="group" aria-label="Period and version">
+      <TextField id={`${idPrefix}-from`} label="From" type="date" value={value.from ?? ''} onChange={(v) => set('from', v)} />
+      <TextField id={`${idPrefix}-to`} label="To (included)" type="date" value={value.to ?? ''} onChange={(v) => set('to', v)} errors={invalid} />
+      <FormGroup label="Ruleset version" labelFor={`${idPrefix}-version`}>
+        <HTMLSelect id={`${idPrefix}-version`} large fill value={value.version ?? ''} onChange={(e) => set('version', e.currentTarget.value)}>
+          <option value="">{allVersionsLabel}</option>
+          {versions.map((v) => (
+            <option key={v.version} value={v.version}>
+              {v.version}
+              {v.active ? ' (active)' : ''}
+            </option>
+          ))}
+        </HTMLSelect>
+      </FormGroup>
+      {(value.from || value.to || value.version) && (
+        <div className="fw-ins-filter-actions">
+          <Button className="fw-touch" size="large" variant="minimal" text="Clear" onClick={() => onChange({})} />
+        </div>
+      )}
+    </div>
+  );
+}

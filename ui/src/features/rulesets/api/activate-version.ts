@@ -1,0 +1,24 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { rulesetsQueryKey } from './get-rulesets';
+
+const catalogQueryKey = ['catalog'] as const;
+const insightsQueryKey = ['insights'] as const;
+
+/** POST /api/rulesets/:version/activate (admin only): roll back (or forward); nothing is deleted. */
+export function activateVersion(version: string): Promise<{ active: string }> {
+  return api.post<{ active: string }>(`/rulesets/${encodeURIComponent(version)}/activate`);
+}
+
+export function useActivateVersion() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: activateVersion,
+    onSettled: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: rulesetsQueryKey }),
+        queryClient.invalidateQueries({ queryKey: catalogQueryKey }),
+        queryClient.invalidateQueries({ queryKey: insightsQueryKey }),
+      ]),
+  });
+}

@@ -1,0 +1,130 @@
+import { useState } from 'react';
+import { Button, HTMLTable, InputGroup, SegmentedControl, Tag } from '@blueprintjs/core';
+import { SearchIcon } from '@blueprintjs/icons';
+import { filterRows, formatChange, formatWeight, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
+
+const PAGE = 40;
+
+/**
+ * The proposal as a diff: each weight's old and proposed value with its evidence (the outcomes
+ * behind it and the 90 % credible interval). Changed ones first, those the outcomes contradict
+ * at the top; filter by what changed and by name or cause.
+ */
+export function DiffTable({
+  id,
+  rows,
+  causeLabel,
+  kind,
+}: {
+  id: string;
+  rows: readonly DiffRow[];
+  causeLabel: (id: string) => string;
+  kind: 'prior' | 'rule';
+}) {
+  const [show, setShow] = useState<DiffShow>('changed');
+  const [text, setText] = useState('');
+  const [limit, setLimit] = useState(PAGE);
+  const sorted = sortRows(rows);
+  const shown = filterRows(sorted, show, text, causeLabel);
+  const counts = { changed: rows.filter((r) => r.changed).length, disagrees: rows.filter((r) => r.disagrees).length, all: rows.length };
+  return (
+    <div className="fw-rs-diff">
+      <div className="fw-rs-diff-filters">
+        <SegmentedControl
+          aria-label={kind === 'prior' ? 'Cause priors shown' : 'Rules shown'}
+          size="large"
+          options={[
+            { value: 'changed', label: `Changed (${counts.changed})` },
+            { value: 'disagrees', label: `Disagree (${counts.disagrees})` },
+            { value: 'all', label: `All (${counts.all})` },
+          ]}
+          value={show}
+          onValueChange={(v) => {
+            setShow(v as DiffShow);
+            setLimit(PAGE);
+          }}
+        />
+        <InputGroup
+          id={`${id}-search`}
+          aria-label={kind === 'prior' ? 'Find a cause' : 'Find a rule or cause'}
+          size="large"
+          leftIcon={<SearchIcon />}
+          placeholder={kind === 'prior' ? 'Find a cause' : 'Find a rule or cause'}
+          value={text}
+          onValueChange={(v) => {
+            setText(v);
+            setLimit(PAGE);
+          }}
+        />
+      </div>
+      <p className="fw-muted fw-small fw-rs-count" role="status">
+        {shown.length === rows.length ? `${rows.length} shown` : `${shown.length} of ${rows.length} shown`}
+        {shown.length > limit ? `; the first ${limit} below` : ''}
+      </p>
+      {shown.length > 0 && (
+        <div className="fw-rs-scroll">
+          <HTMLTable compact striped className="fw-rs-table fw-rs-diff-table" aria-labelledby={id}>
+            <thead>
+              <tr>
+                <th scope="col">{kind === 'prior' ? 'Cause' : 'Rule'}</th>
+                <th scope="col" className="fw-rs-num">
+                  Old → proposed
+                </th>
+                <th scope="col">Evidence</th>
+              </tr>
+            </thead>
+            <tbody>
+              {shown.slice(0, limit).map((r) => (
+                <tr key={r.id} className={r.changed ? undefined : 'fw-rs-unchanged'}>
+                  <td className="fw-break-word">
+                    {kind === 'prior' ? (
+                      <strong>{causeLabel(r.cause)}</strong>
+                    ) : (
+                      <>
+                        <code className="fw-rs-rule">{r.id}</code>
+                        <div className="fw-small">For {causeLabel(r.cause)}</div>
+                      </>
+                    )}
+                  </td>
+                  <td className="fw-rs-num fw-nowrap">
+                    <span className="fw-muted">{formatWeight(r.old)}</span> → <strong>{formatWeight(r.proposed)}</strong>
+                    <div className="fw-small">{r.changed ? formatChange(r.old, r.proposed) : 'unchanged'}</div>
+                  </td>
+                  <td>
+                    <div className="fw-nowrap">
+                      {r.outcomes.toLocaleString()} {r.outcomes === 1 ? 'outcome' : 'outcomes'}
+                      {r.causeOutcomes !== undefined && <span className="fw-muted fw-small"> ({formatWeight(r.causeOutcomes)} of its cause)</span>}
+                    </div>
+                    <div className="fw-small fw-nowrap">
+                      90 % interval {formatWeight(r.interval[0])}–{formatWeight(r.interval[1])}
+                    </div>
+                    <div className="fw-rs-tags">
+                      {r.disagrees && (
+                        <Tag minimal round intent="warning">
+                          Outcomes disagree with the old value
+                        </Tag>
+                      )}
+                      {r.kept && (
+                        <Tag minimal round>
+                          Kept: no outcome of its cause
+                        </Tag>
+                      )}
+                      {r.flat && (
+                        <Tag minimal round intent="primary">
+                          Near 1: candidate for removal
+                        </Tag>
+                      )}
+                    </div>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </HTMLTable>
+        </div>
+      )}
+      {shown.length > limit && (
+        <Button className="fw-touch" variant="outlined" text={`Show ${Math.min(PAGE, shown.length - limit)} more`} onClick={() => setLimit((n) => n + PAGE)} />
+      )}
+    </div>
+  );
+}

@@ -12,7 +12,6 @@ import {
   FolderOpenIcon,
   FolderSharedIcon,
   HomeIcon,
-  NotificationsIcon,
   PeopleIcon,
   type SVGIconProps,
 } from '@blueprintjs/icons';
@@ -254,7 +253,6 @@ export const appRoutes: readonly AppRoute[] = [
     title: 'E-mail settings',
     access: 'signed-in',
     page: () => import('../features/account/components/email-settings-page').then((m) => m.EmailSettingsPage),
-    menu: { icon: NotificationsIcon, order: 85, label: 'E-mails' },
   },
   {
     path: paths.outbox,

@@ -1,3 +1,4 @@
+import { ThumbsUpIcon } from '@blueprintjs/icons';
 import type { CaseDto } from '@fuelwright/shared';
 import { useRequiredUser } from '../../../lib/current-user';
 import { CommentsPanel } from './comments-panel';
@@ -31,12 +32,12 @@ export function CaseReview({ c, checkLabel, onCase }: CaseReviewProps) {
       <div className="fw-review-column">
         {!owner && open && <RecommendCheckPanel c={c} checkLabel={checkLabel} onCase={onCase} />}
         {!owner && !open && c.recommendations.length > 0 && (
-          <ReviewPanel id="review-recommend" title="Recommended checks">
+          <ReviewPanel id="review-recommend" title="Recommended checks" icon={<ThumbsUpIcon size={20} className="fw-title-icon" />} className="fw-review-order-1">
             <RecommendationList c={c} checkLabel={checkLabel} />
           </ReviewPanel>
         )}
         {owner && c.recommendations.length > 0 && (
-          <ReviewPanel id="review-recommend" title="Recommended checks">
+          <ReviewPanel id="review-recommend" title="Recommended checks" icon={<ThumbsUpIcon size={20} className="fw-title-icon" />} className="fw-review-order-1">
             <p className="fw-muted fw-small fw-review-lead">A recommended check leads your plan until you record its result.</p>
             <RecommendationList c={c} checkLabel={checkLabel} />
           </ReviewPanel>

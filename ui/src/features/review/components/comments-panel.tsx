@@ -1,7 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { Button, Callout, NonIdealState, Spinner, Tag } from '@blueprintjs/core';
+import { Button, Callout, Spinner, Tag } from '@blueprintjs/core';
 import { ChatIcon, SendMessageIcon } from '@blueprintjs/icons';
+import { Link } from 'react-router-dom';
 import { COMMENT_MAX_LENGTH, type CommentDto } from '@fuelwright/shared';
+import { paths } from '../../../app/paths';
 import { useRequiredUser } from '../../../lib/current-user';
 import { formErrors } from '../../../lib/form-errors';
 import { useAddComment } from '../api/add-comment';
@@ -45,7 +47,7 @@ export function CommentsPanel({ caseId }: { caseId: string }) {
   };
 
   return (
-    <ReviewPanel id="review-comments" title="Comments" icon={<ChatIcon size={20} className="fw-title-icon" />}>
+    <ReviewPanel id="review-comments" title="Comments" icon={<ChatIcon size={20} className="fw-title-icon" />} className="fw-review-order-2">
       {comments.isPending ? (
         <Spinner size={24} aria-label="Loading comments" />
       ) : comments.isError ? (
@@ -54,7 +56,7 @@ export function CommentsPanel({ caseId }: { caseId: string }) {
           <Button variant="minimal" size="small" text="Try again" onClick={() => void comments.refetch()} />
         </Callout>
       ) : comments.data.length === 0 ? (
-        <NonIdealState className="fw-review-empty" description="No comments yet. Ask a question, or say what you found." layout="horizontal" />
+        <p className="fw-muted">No comments yet. Ask a question, or say what you found.</p>
       ) : (
         <ol className="fw-comments" aria-label="Comments">
           {comments.data.map((comment) => (
@@ -70,7 +72,11 @@ export function CommentsPanel({ caseId }: { caseId: string }) {
           onChange={setBody}
           maxLength={COMMENT_MAX_LENGTH}
           errors={errors.field('body')}
-          hint="Plain text. Everyone on this case sees it and gets an e-mail."
+          hint={
+            <>
+              Plain text. Everyone on this case sees it and gets an e-mail (<Link to={paths.emailSettings}>e-mail settings</Link>).
+            </>
+          }
         />
         {errors.form && (
           <Callout className="fw-form-error" intent="danger" role="alert">

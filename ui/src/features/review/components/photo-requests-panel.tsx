@@ -132,7 +132,7 @@ export function PhotoRequestsPanel({ c, canAsk, canAnswer, checkLabel }: { c: Ca
       id="review-photo-requests"
       title={pending > 0 && canAnswer ? `Photos asked for (${pending})` : 'Photos asked for'}
       icon={<CameraIcon size={20} className="fw-title-icon" />}
-      className={pending > 0 && canAnswer ? 'fw-review-attention' : undefined}
+      className={pending > 0 && canAnswer ? 'fw-review-attention fw-review-order-0' : 'fw-review-order-3'}
     >
       {requests.isPending ? (
         <Spinner size={24} aria-label="Loading photo requests" />

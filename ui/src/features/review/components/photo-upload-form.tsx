@@ -9,7 +9,7 @@ import { useUploadPhoto } from '../api/upload-photo';
 import { CAPTION_MAX_LENGTH, formatBytes, PHOTO_ACCEPT, photoFileProblem } from '../lib/photo-file';
 
 /** Phones and tablets: offer the camera as well as the photo library. */
-const TOUCH_QUERY = '(pointer: coarse)';
+const TOUCH_QUERY = '(pointer: coarse), (max-width: 767px)';
 
 /** The message for a refused upload: the server's words about the file first. */
 function uploadErrorMessage(error: unknown): string | null {

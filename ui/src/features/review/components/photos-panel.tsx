@@ -9,7 +9,7 @@ import { ReviewPanel } from './review-panel';
 export function PhotosPanel({ caseId, checkLabel }: { caseId: string; checkLabel: (id: string) => string }) {
   const photos = usePhotos(caseId);
   return (
-    <ReviewPanel id="review-photos" title="Photos" icon={<MediaIcon size={20} className="fw-title-icon" />}>
+    <ReviewPanel id="review-photos" title="Photos" icon={<MediaIcon size={20} className="fw-title-icon" />} className="fw-review-order-4">
       {photos.isPending ? (
         <Spinner size={24} aria-label="Loading photos" />
       ) : photos.isError ? (

@@ -64,7 +64,7 @@ export function RecommendCheckPanel({ c, checkLabel, onCase }: { c: CaseDto; che
   };
 
   return (
-    <ReviewPanel id="review-recommend" title="Recommend the next check" icon={<ThumbsUpIcon size={20} className="fw-title-icon" />}>
+    <ReviewPanel id="review-recommend" title="Recommend the next check" icon={<ThumbsUpIcon size={20} className="fw-title-icon" />} className="fw-review-order-1">
       {plan.length === 0 ? (
         <p className="fw-muted">No checks are left in the plan.</p>
       ) : (
@@ -84,7 +84,7 @@ export function RecommendCheckPanel({ c, checkLabel, onCase }: { c: CaseDto; che
               onChange={(event) => setCheckId(event.currentTarget.value)}
               options={plan.map((step, index) => ({
                 value: step.checkId,
-                label: `${index + 1}. ${checkLabel(step.checkId) || step.label} (about ${step.minutes + step.openingMinutes} min)`,
+                label: `${index + 1}. ${checkLabel(step.checkId) || step.label} (${step.minutes + step.openingMinutes} min)`,
               }))}
             />
           </FormGroup>

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Alert, Button, Callout, FormGroup, SegmentedControl, Spinner, Tag } from '@blueprintjs/core';
-import { EnvelopeIcon, ShareIcon, UndoIcon } from '@blueprintjs/icons';
+import { EnvelopeIcon, PeopleIcon, UndoIcon } from '@blueprintjs/icons';
 import { INVITATION_DAYS, type CaseDto, type ShareDto, type ShareScope } from '@fuelwright/shared';
 import { TextField } from '../../../components/text-field';
 import { useNotify } from '../../../components/toaster';
@@ -90,7 +90,7 @@ export function SharePanel({ c }: { c: CaseDto }) {
   };
 
   return (
-    <ReviewPanel id="review-share" title="Share with a coach or shop" icon={<ShareIcon size={20} className="fw-title-icon" />}>
+    <ReviewPanel id="review-share" title="Share with a coach or shop" icon={<PeopleIcon size={20} className="fw-title-icon" />} className="fw-review-order-5">
       <p className="fw-muted fw-small fw-review-lead">
         They see this case as you do (symptoms, setup, conditions, every check) and can comment, ask for a photo and recommend the next
         check. They cannot change anything.

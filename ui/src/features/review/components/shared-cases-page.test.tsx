@@ -28,7 +28,7 @@ describe('shared cases dashboard', () => {
     expect(within(groups[0]).getByText('1 photo awaited')).toBeInTheDocument();
     expect(within(groups[0]).getByText('Resolved')).toBeInTheDocument();
     expect(within(groups[1]).getByText('Bowl foam missing, rotten or soaked')).toBeInTheDocument();
-    expect(within(groups[1]).getByText('(62 %)')).toBeInTheDocument();
+    expect(within(groups[1]).getByText('(62%)')).toBeInTheDocument();
   });
 
   it('says what to do when nothing is shared yet', async () => {

@@ -70,7 +70,12 @@ export function SharedCasesPage() {
   const causes = new Map((catalog.data?.causes ?? []).map((cause) => [cause.id, cause.label]));
   const causeLabel = (id: string) => (id === SOMETHING_ELSE_ID ? (catalog.data?.somethingElse.label ?? 'Something else') : (causes.get(id) ?? id));
 
-  const lead = 'Cases your racers share with you: review them, comment, ask for a photo and recommend the next check.';
+  const lead = (
+    <>
+      Cases your racers share with you: review them, comment, ask for a photo and recommend the next check. You get an e-mail when
+      something changes (<Link to={paths.emailSettings}>e-mail settings</Link>).
+    </>
+  );
   if (cases.isPending) return <PageSpinner label="Loading shared cases" />;
   if (cases.isError) {
     return (

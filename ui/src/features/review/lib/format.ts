@@ -13,7 +13,7 @@ export function roleLabel(role: string | null | undefined): string {
   return role ? (ROLE_LABELS[role] ?? '') : '';
 }
 
-/** "62 %" */
+/** "62%" (as the case list writes it) */
 export function formatPercent(probability: number): string {
-  return `${Math.round(probability * 100)} %`;
+  return `${Math.round(probability * 100)}%`;
 }

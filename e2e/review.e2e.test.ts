@@ -165,6 +165,8 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await signInWithForm(coach, baseUrl, COACH);
     await coach.goto(`${baseUrl}${invitationPathIn(invitation)}`);
     await coach.getByText('Marit Quayle', { exact: false }).first().waitFor();
+    await coach.getByRole('button', { name: 'Accept the invitation' }).waitFor();
+    await snap(coach, 'review-invitation-desktop');
     await coach.getByRole('button', { name: 'Accept the invitation' }).click();
     await coach.waitForURL(`${baseUrl}/cases/${caseId}`);
     await coach.getByRole('heading', { name: 'Case on Blue 27' }).waitFor();
@@ -285,6 +287,12 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await snap(racerDesk, 'review-racer-case-desktop');
     await snapPart(racerDesk.getByRole('region', { name: 'Comments' }), 'review-racer-comments-desktop');
     await snapPart(deskGallery, 'review-photos-desktop');
+
+    // Each kind of notice can be turned off (the notices' own links do the same for one kind).
+    await racer.goto(`${baseUrl}/account/e-mails`);
+    await racer.getByRole('checkbox', { name: 'New comments on a case' }).waitFor();
+    expect(await racer.getByRole('checkbox').count()).toBe(5);
+    await snap(racer, 'review-email-settings-phone');
 
     // The coach sees the answer.
     await coach.reload();

@@ -1,5 +1,5 @@
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { cpSync, existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -56,11 +56,14 @@ export default async function setup(project: TestProject) {
   }
   execFileSync('npm', ['run', 'build'], { cwd: ROOT, stdio: 'inherit' });
   const dataDir = mkdtempSync(join(tmpdir(), 'fw-e2e-data-'));
+  // Serve a copy of the built UI, so a rebuild elsewhere cannot pull files from under the running app.
+  const uiDist = join(dataDir, 'ui-dist');
+  cpSync(join(ROOT, 'ui', 'dist'), uiDist, { recursive: true });
   const port = await freePort();
   let output = '';
   const child = spawn(process.execPath, ['service/dist/main.js'], {
     cwd: ROOT,
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, SEED_DEMO: 'true', THROTTLE_LIMIT: '1000', NODE_ENV: 'test' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, UI_DIST: uiDist, SEED_DEMO: 'true', THROTTLE_LIMIT: '1000', NODE_ENV: 'test' },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout!.on('data', (d) => (output += d));

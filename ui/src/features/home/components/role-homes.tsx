@@ -1,6 +1,8 @@
 import {
   BookIcon,
+  ChartIcon,
   ClipboardIcon,
+  CloudIcon,
   DiagnosisIcon,
   DriveTimeIcon,
   EndorsedIcon,
@@ -18,7 +20,6 @@ function QuickDiagnosisCard({ primary = false }: { primary?: boolean }) {
       title="Quick diagnosis"
       to={paths.quickDiagnosis}
       action="Start a quick diagnosis"
-      comingNext
       primary={primary}
     >
       Say what the engine does and where, and get the likely causes with a check plan, quickest checks first.
@@ -37,6 +38,9 @@ export function RacerHome() {
       <HomeCard icon={FolderOpenIcon} title="Cases" to={paths.cases} action="Open cases">
         Each running problem you worked through: the likely causes, every check with its result, and what fixed it.
       </HomeCard>
+      <HomeCard icon={CloudIcon} title="Conditions" to={paths.conditions} action="Work out today's air">
+        Today&apos;s air density from temperature, pressure and humidity; each kart&apos;s jetting log suggests the jets for it.
+      </HomeCard>
     </HomeGrid>
   );
 }
@@ -44,9 +48,9 @@ export function RacerHome() {
 export function CoachHome() {
   return (
     <HomeGrid>
-      <HomeCard icon={FolderSharedIcon} title="Shared cases" to={paths.sharedCases} action="Open shared cases" comingNext primary>
-        Nothing shared with you yet. When your racers share a case you can review it, comment, ask for a photo and
-        recommend the next check.
+      <HomeCard icon={FolderSharedIcon} title="Shared cases" to={paths.sharedCases} action="Open shared cases" primary>
+        The cases your racers share with you, open ones first: review each one, comment, ask for a photo and recommend
+        the next check.
       </HomeCard>
       <QuickDiagnosisCard />
     </HomeGrid>
@@ -56,12 +60,14 @@ export function CoachHome() {
 export function ShopHome() {
   return (
     <HomeGrid>
-      <HomeCard icon={ClipboardIcon} title="Work orders" to={paths.workOrders} action="Open work orders" comingNext primary>
-        No work orders yet. Customers&apos; karts in for work will be listed here with the case that brought them in.
+      <HomeCard icon={ClipboardIcon} title="Work orders" to={paths.workOrders} action="Open work orders" primary>
+        Customers&apos; karts in for work: from a case shared with you, or a walk-in whose symptoms you enter on the spot.
       </HomeCard>
-      <HomeCard icon={EndorsedIcon} title="Outcomes" to={paths.outcomes} action="Open outcomes" comingNext>
-        No outcomes logged yet. Log what was really wrong and what fixed it, so the ranking learns which causes are
-        common.
+      <HomeCard icon={EndorsedIcon} title="Outcomes" to={paths.outcomes} action="Open outcomes">
+        Log what was really wrong and what fixed it, so the ranking learns which causes are common.
+      </HomeCard>
+      <HomeCard icon={ChartIcon} title="Insights" to={paths.insights} action="Open insights">
+        How well the ranking did against the outcomes: accuracy, calibration, and the rules that misled.
       </HomeCard>
       <QuickDiagnosisCard />
     </HomeGrid>
@@ -74,11 +80,11 @@ export function AdminHome() {
       <HomeCard icon={PeopleIcon} title="Users" to={paths.users} action="Manage users" primary>
         See every account and set its role: racer, coach, shop or admin.
       </HomeCard>
-      <HomeCard icon={BookIcon} title="Rulesets" to={paths.rulesets} action="Open rulesets" comingNext>
+      <HomeCard icon={BookIcon} title="Rulesets" to={paths.rulesets} action="Open rulesets">
         Publish and roll back versions of the knowledge base: symptoms, causes, checks, cautions and rule weights.
       </HomeCard>
-      <HomeCard icon={EndorsedIcon} title="Outcomes" to={paths.outcomes} action="Open outcomes" comingNext>
-        What shops and racers logged as the real cause and fix, to check how well the rules rank.
+      <HomeCard icon={ChartIcon} title="Insights" to={paths.insights} action="Open insights">
+        What shops and racers logged as the real cause and fix, and how well the rules ranked against it.
       </HomeCard>
     </HomeGrid>
   );

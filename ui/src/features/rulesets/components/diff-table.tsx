@@ -3,7 +3,7 @@ import { Button, HTMLTable, InputGroup, SegmentedControl, Tag } from '@blueprint
 import { SearchIcon } from '@blueprintjs/icons';
 import { filterRows, formatChange, formatWeight, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
 
-const PAGE = 40;
+const PAGE = 20;
 
 /**
  * The proposal as a diff: each weight's old and proposed value with its evidence (the outcomes
@@ -26,7 +26,8 @@ export function DiffTable({
   const [limit, setLimit] = useState(PAGE);
   const sorted = sortRows(rows);
   const shown = filterRows(sorted, show, text, causeLabel);
-  const counts = { changed: rows.filter((r) => r.changed).length, disagrees: rows.filter((r) => r.disagrees).length, all: rows.length };
+  const changed = rows.filter((r) => r.changed).length;
+  const disagrees = rows.filter((r) => r.disagrees).length;
   return (
     <div className="fw-rs-diff">
       <div className="fw-rs-diff-filters">
@@ -34,9 +35,9 @@ export function DiffTable({
           aria-label={kind === 'prior' ? 'Cause priors shown' : 'Rules shown'}
           size="large"
           options={[
-            { value: 'changed', label: `Changed (${counts.changed})` },
-            { value: 'disagrees', label: `Disagree (${counts.disagrees})` },
-            { value: 'all', label: `All (${counts.all})` },
+            { value: 'changed', label: 'Changed' },
+            { value: 'disagrees', label: 'Disagree' },
+            { value: 'all', label: 'All' },
           ]}
           value={show}
           onValueChange={(v) => {
@@ -59,7 +60,8 @@ export function DiffTable({
       </div>
       <p className="fw-muted fw-small fw-rs-count" role="status">
         {shown.length === rows.length ? `${rows.length} shown` : `${shown.length} of ${rows.length} shown`}
-        {shown.length > limit ? `; the first ${limit} below` : ''}
+        {shown.length > limit ? `; the first ${limit} below` : ''}. {changed} changed; the outcomes disagree with {disagrees} old{' '}
+        {disagrees === 1 ? 'value' : 'values'} (outside the 90 % interval).
       </p>
       {shown.length > 0 && (
         <div className="fw-rs-scroll">
@@ -86,16 +88,16 @@ export function DiffTable({
                       </>
                     )}
                   </td>
-                  <td className="fw-rs-num fw-nowrap">
+                  <td className="fw-rs-num fw-nowrap" data-label="Old → proposed">
                     <span className="fw-muted">{formatWeight(r.old)}</span> → <strong>{formatWeight(r.proposed)}</strong>
                     <div className="fw-small">{r.changed ? formatChange(r.old, r.proposed) : 'unchanged'}</div>
                   </td>
                   <td>
-                    <div className="fw-nowrap">
+                    <div>
                       {r.outcomes.toLocaleString()} {r.outcomes === 1 ? 'outcome' : 'outcomes'}
                       {r.causeOutcomes !== undefined && <span className="fw-muted fw-small"> ({formatWeight(r.causeOutcomes)} of its cause)</span>}
                     </div>
-                    <div className="fw-small fw-nowrap">
+                    <div className="fw-small">
                       90 % interval {formatWeight(r.interval[0])}–{formatWeight(r.interval[1])}
                     </div>
                     <div className="fw-rs-tags">

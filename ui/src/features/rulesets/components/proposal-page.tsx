@@ -100,11 +100,8 @@ function Progress({ p }: { p: Proposal }) {
         intent={p.status === 'failed' ? 'danger' : running ? 'primary' : 'success'}
         animate={running}
         stripes={running}
-        aria-labelledby="proposal-progress-label"
-        aria-valuenow={Math.round(value * 100)}
-        aria-valuemin={0}
-        aria-valuemax={100}
-        role="progressbar"
+        aria-label="Proposal progress"
+        aria-describedby="proposal-progress-label"
       />
     </div>
   );

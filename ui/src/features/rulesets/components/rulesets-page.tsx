@@ -5,6 +5,7 @@ import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
 import { useRequiredUser } from '../../../lib/current-user';
+import { useMediaQuery } from '../../../lib/use-media-query';
 import { useActivateVersion } from '../api/activate-version';
 import { useRulesets, type RulesetVersionInfo } from '../api/get-rulesets';
 import { compareVersions, nextVersion } from '../lib/versions';
@@ -22,6 +23,7 @@ export function RulesetsPage() {
   const activate = useActivateVersion();
   const notify = useNotify();
   const [confirming, setConfirming] = useState<RulesetVersionInfo | null>(null);
+  const phone = useMediaQuery('(max-width: 767px)');
 
   if (rulesets.isPending) return <PageSpinner label="Loading ruleset versions" />;
   if (rulesets.isError)
@@ -38,6 +40,15 @@ export function RulesetsPage() {
   const newestFirst = [...versions].sort((a, b) => compareVersions(b.version, a.version));
   const published = versions.map((v) => v.version);
   const rollBack = confirming !== null && compareVersions(confirming.version, active) < 0;
+  const activateButton = (v: RulesetVersionInfo) => (
+    <Button
+      className="fw-touch"
+      variant="outlined"
+      icon={<HistoryIcon />}
+      text={compareVersions(v.version, active) < 0 ? `Roll back to ${v.version}` : `Activate ${v.version}`}
+      onClick={() => setConfirming(v)}
+    />
+  );
 
   return (
     <Page
@@ -61,22 +72,29 @@ export function RulesetsPage() {
                 <th scope="col" className="fw-hide-on-phone">
                   Published
                 </th>
-                {admin && <th scope="col" className="fw-rs-action-col"><span className="fw-visually-hidden">Actions</span></th>}
+                {admin && !phone && (
+                  <th scope="col" className="fw-rs-action-col">
+                    <span className="fw-visually-hidden">Actions</span>
+                  </th>
+                )}
               </tr>
             </thead>
             <tbody>
               {newestFirst.map((v) => (
                 <tr key={v.version} aria-current={v.active ? 'true' : undefined}>
-                  <td className="fw-nowrap">
-                    <strong>{v.version}</strong>{' '}
-                    {v.active && (
-                      <Tag round intent="success">
-                        Active
-                      </Tag>
-                    )}
+                  <td>
+                    <span className="fw-nowrap">
+                      <strong>{v.version}</strong>{' '}
+                      {v.active && (
+                        <Tag round intent="success">
+                          Active
+                        </Tag>
+                      )}
+                    </span>
                     <div className="fw-muted fw-small">
                       {v.causes} causes, {v.rules} rules
                     </div>
+                    {admin && phone && !v.active && <div className="fw-rs-phone-action">{activateButton(v)}</div>}
                   </td>
                   <td className="fw-break-word">
                     {v.notes || <span className="fw-muted">No notes</span>}
@@ -84,19 +102,7 @@ export function RulesetsPage() {
                     <div className="fw-muted fw-small fw-rs-phone-only">{when(v.publishedAt)}</div>
                   </td>
                   <td className="fw-hide-on-phone fw-nowrap">{when(v.publishedAt)}</td>
-                  {admin && (
-                    <td>
-                      {!v.active && (
-                        <Button
-                          className="fw-touch"
-                          variant="outlined"
-                          icon={<HistoryIcon />}
-                          text={compareVersions(v.version, active) < 0 ? `Roll back to ${v.version}` : `Activate ${v.version}`}
-                          onClick={() => setConfirming(v)}
-                        />
-                      )}
-                    </td>
-                  )}
+                  {admin && !phone && <td className="fw-nowrap">{!v.active && activateButton(v)}</td>}
                 </tr>
               ))}
             </tbody>

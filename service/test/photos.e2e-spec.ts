@@ -70,6 +70,7 @@ describe('photos of a case', () => {
     const big = Buffer.concat([Buffer.from([0xff, 0xd8, 0xff]), Buffer.alloc(15 * 1024 * 1024 + 10)]);
     const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', big, { filename: 'big.jpg', contentType: 'image/jpeg' });
     expect(res.status).toBe(413);
+    expect(res.body.fields.file[0]).toMatch(/at most 15 MB/);
   });
 
   it('lets only people who can see the case list or fetch its photos', async () => {

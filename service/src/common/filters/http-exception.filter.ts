@@ -35,6 +35,12 @@ export class ApiExceptionFilter implements ExceptionFilter {
         message: typeof message === 'string' && message ? message : exception.message,
       };
       if (obj.fields && typeof obj.fields === 'object') body.fields = obj.fields as Record<string, string[]>;
+      const path = host.switchToHttp().getRequest<{ path?: string }>().path ?? '';
+      if (status === HttpStatus.PAYLOAD_TOO_LARGE && /\/photos$/.test(path)) {
+        // The upload limit, hit before the handler ran (multer): name the field like every other 4xx.
+        body.message = 'A photo may be at most 15 MB.';
+        body.fields = { file: [body.message] };
+      }
     } else if (isBodyParserError(exception)) {
       body = { statusCode: exception.status, error: REASON[exception.status] ?? 'Bad Request', message: exception.status === 413 ? 'The request body is too large.' : 'The request body is not valid JSON.' };
     } else {

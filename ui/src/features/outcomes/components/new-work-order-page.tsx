@@ -166,7 +166,10 @@ export function NewWorkOrderPage() {
                       <Checkbox
                         size="large"
                         checked={symptoms.includes(s.id)}
-                        onChange={(e) => setSymptoms((list) => (e.currentTarget.checked ? [...list, s.id] : list.filter((x) => x !== s.id)))}
+                        onChange={(e) => {
+                          const on = e.currentTarget.checked;
+                          setSymptoms((list) => (on ? [...list, s.id] : list.filter((x) => x !== s.id)));
+                        }}
                         labelElement={
                           <>
                             <strong className="fw-break-word">{s.label}</strong>

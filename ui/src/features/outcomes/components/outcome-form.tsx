@@ -45,7 +45,12 @@ export function OutcomeForm({
   const log = useLogOutcome();
   const server = formErrors(log.error, FIELDS);
   const errorsFor = (field: string): string[] => (local[field] ? [local[field]] : server.field(field));
-  const set = <K extends keyof OutcomeDraft>(key: K, value: OutcomeDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+  const set = <K extends keyof OutcomeDraft>(key: K, value: OutcomeDraft[K]) => {
+    setDraft((d) => ({ ...d, [key]: value }));
+    // A message the browser gave goes once the field changes (the next submit checks again).
+    const field = key === 'causes' ? 'confirmedCauses' : key;
+    setLocal((errors) => (field in errors ? Object.fromEntries(Object.entries(errors).filter(([name]) => name !== field)) : errors));
+  };
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();

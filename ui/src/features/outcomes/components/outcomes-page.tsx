@@ -97,7 +97,7 @@ export function OutcomesPage() {
     body = (
       <NonIdealState
         icon={<EndorsedIcon size={48} />}
-        title="No outcomes in this period"
+        title={filter.from || filter.to || filter.version ? 'No outcomes in this period' : 'No outcomes logged yet'}
         description={user.role === 'shop' ? 'Log one from a work order or a shared case.' : 'Shops and racers log outcomes on work orders and cases.'}
       />
     );

@@ -13,7 +13,10 @@
  *   BENCH_OUTCOMES=50000 BENCH_STRENGTH=200 BENCH_POLL_MS=250 npm run bench -w service
  *
  * The service runs from its build (Nest needs decorator metadata, which tsx does not emit): the
- * bench builds it first with `tsc -b` (quick when nothing changed).
+ * bench builds it first with `tsc -b` (quick when nothing changed). It runs under
+ * `node --import tsx/esm`, not the `tsx` command: the command's CommonJS hook loads a second copy
+ * of @nestjs/core for `import` (beside the one `require` gives the Nest packages), and Nest then
+ * cannot match its own Reflector ("can't resolve dependencies of the ThrottlerGuard").
  */
 import 'reflect-metadata';
 import { execFileSync } from 'node:child_process';
@@ -64,8 +67,9 @@ async function main(): Promise<void> {
   const t2 = performance.now();
   console.log(`Generated and inserted ${inserted.toLocaleString('en')} invented outcomes in ${s(t2 - t1)}`);
 
+  // BENCH_LOG=1 shows the application's log (start-up errors included).
   const app = await createApp({
-    logger: false,
+    logger: process.env.BENCH_LOG ? undefined : false,
     database: handle,
     config: {
       sessionSecret: 'bench-secret-that-is-long-enough-0123456789',

@@ -137,8 +137,20 @@ function Calibration({ data }: { data: InsightsResponse }) {
   );
 }
 
+/** The first rows of a long table, and a button for the rest. */
+const FIRST_ROWS = 10;
+function useFirstRows<T>(rows: readonly T[]): { shown: readonly T[]; more: ReactNode } {
+  const [all, setAll] = useState(false);
+  const hidden = all ? 0 : Math.max(0, rows.length - FIRST_ROWS);
+  return {
+    shown: hidden ? rows.slice(0, FIRST_ROWS) : rows,
+    more: hidden ? <Button className="fw-touch" variant="outlined" text={`Show all ${rows.length}`} onClick={() => setAll(true)} /> : null,
+  };
+}
+
 function Pairs({ data, labels }: { data: InsightsResponse; labels: Labels }) {
   const pairs = data.insights.symptomCausePairs;
+  const { shown, more } = useFirstRows(pairs);
   if (pairs.length === 0) return <p className="fw-muted">No outcomes in this period.</p>;
   return (
     <div className="fw-ins-scroll">
@@ -155,7 +167,7 @@ function Pairs({ data, labels }: { data: InsightsResponse; labels: Labels }) {
           </tr>
         </thead>
         <tbody>
-          {pairs.map((p) => (
+          {shown.map((p) => (
             <tr key={`${p.symptom}|${p.cause}`}>
               <td className="fw-break-word">
                 {labels.symptom(p.symptom)} <span className="fw-muted">→</span> <strong>{labels.cause(p.cause)}</strong>
@@ -168,6 +180,7 @@ function Pairs({ data, labels }: { data: InsightsResponse; labels: Labels }) {
           ))}
         </tbody>
       </HTMLTable>
+      {more}
     </div>
   );
 }
@@ -215,6 +228,7 @@ function Labour({ data, labels }: { data: InsightsResponse; labels: Labels }) {
 
 function WrongWay({ data, labels }: { data: InsightsResponse; labels: Labels }) {
   const { rules, unknownRuleFirings } = data.insights.wrongWayRules;
+  const { shown, more } = useFirstRows(rules);
   if (rules.length === 0) return <p className="fw-muted">No rule pointed the wrong way in this period (or no rule fired).</p>;
   return (
     <>
@@ -236,14 +250,14 @@ function WrongWay({ data, labels }: { data: InsightsResponse; labels: Labels }) 
             </tr>
           </thead>
           <tbody>
-            {rules.map((r) => (
+            {shown.map((r) => (
               <tr key={r.rule}>
                 <td className="fw-break-word">
                   <strong>{ruleLabel(r.rule, labels)}</strong>
                   <div className="fw-small">
                     {r.direction === 'for' ? 'raises' : 'lowers'} {labels.cause(r.cause)} (ratio {r.lr})
                   </div>
-                  <code className="fw-ins-rule fw-muted">{r.rule}</code>
+                  <code className="fw-ins-rule fw-muted fw-hide-on-phone">{r.rule}</code>
                 </td>
                 <td className="fw-ins-num fw-nowrap">
                   {formatCount(r.wrongWay)} <span className="fw-muted fw-small">of {formatCount(r.fired)}</span>
@@ -257,6 +271,7 @@ function WrongWay({ data, labels }: { data: InsightsResponse; labels: Labels }) 
           </tbody>
         </HTMLTable>
       </div>
+      {more}
       {unknownRuleFirings > 0 && <p className="fw-muted fw-small">{formatCount(unknownRuleFirings)} firings of rules this version does not know were left out.</p>}
     </>
   );

@@ -1,7 +1,9 @@
 import { useState } from 'react';
 import { Button, Callout, Card, H2, Spinner } from '@blueprintjs/core';
-import { EndorsedIcon } from '@blueprintjs/icons';
+import { ClipboardIcon, EndorsedIcon } from '@blueprintjs/icons';
 import type { CaseDto, OutcomeDto } from '@fuelwright/shared';
+import { paths } from '../../../app/paths';
+import { LinkButton } from '../../../components/link-button';
 import { useNotify } from '../../../components/toaster';
 import { useCurrentUser } from '../../../lib/current-user';
 import { useCatalog } from '../api/get-catalog';
@@ -83,17 +85,29 @@ export function LogOutcomePanel({ c }: LogOutcomePanelProps) {
           onCancel={() => setOpen(false)}
         />
       ) : (
-        !hasCurrent && (
-          <Button
-            className="fw-touch"
-            size="large"
-            intent="primary"
-            icon={<EndorsedIcon />}
-            text="Log the outcome"
-            loading={catalog.isPending}
-            onClick={() => setOpen(true)}
-          />
-        )
+        <div className="fw-oc-actions">
+          {!hasCurrent && (
+            <Button
+              className="fw-touch"
+              size="large"
+              intent="primary"
+              icon={<EndorsedIcon />}
+              text="Log the outcome"
+              loading={catalog.isPending}
+              onClick={() => setOpen(true)}
+            />
+          )}
+          {shop && (
+            <LinkButton
+              className="fw-touch"
+              size="large"
+              variant="outlined"
+              icon={<ClipboardIcon />}
+              to={`${paths.newWorkOrder}?caseId=${encodeURIComponent(c.id)}`}
+              text="Open a work order for it"
+            />
+          )}
+        </div>
       )}
     </Card>
   );

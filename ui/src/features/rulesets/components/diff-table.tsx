@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, HTMLTable, InputGroup, SegmentedControl, Tag } from '@blueprintjs/core';
 import { SearchIcon } from '@blueprintjs/icons';
-import { filterRows, formatChange, formatWeight, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
+import { filterRows, formatChange, formatWeight, ruleLabel, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
 
 const PAGE = 20;
 
@@ -14,18 +14,21 @@ export function DiffTable({
   id,
   rows,
   causeLabel,
+  symptomLabel = () => undefined,
   kind,
 }: {
   id: string;
   rows: readonly DiffRow[];
   causeLabel: (id: string) => string;
+  /** A symptom's label, to name rules in words (undefined for an id that is not a symptom). */
+  symptomLabel?: (id: string) => string | undefined;
   kind: 'prior' | 'rule';
 }) {
   const [show, setShow] = useState<DiffShow>('changed');
   const [text, setText] = useState('');
   const [limit, setLimit] = useState(PAGE);
   const sorted = sortRows(rows);
-  const shown = filterRows(sorted, show, text, causeLabel);
+  const shown = filterRows(sorted, show, text, causeLabel, (r) => (r.kind === 'rule' ? ruleLabel(r.id, symptomLabel) : ''));
   const changed = rows.filter((r) => r.changed).length;
   const disagrees = rows.filter((r) => r.disagrees).length;
   return (
@@ -83,8 +86,9 @@ export function DiffTable({
                       <strong>{causeLabel(r.cause)}</strong>
                     ) : (
                       <>
-                        <code className="fw-rs-rule">{r.id}</code>
-                        <div className="fw-small">For {causeLabel(r.cause)}</div>
+                        <strong>{ruleLabel(r.id, symptomLabel)}</strong>
+                        <div className="fw-small">for {causeLabel(r.cause)}</div>
+                        <code className="fw-rs-rule fw-muted">{r.id}</code>
                       </>
                     )}
                   </td>

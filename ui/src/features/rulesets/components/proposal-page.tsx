@@ -137,6 +137,7 @@ export function ProposalPage() {
   const r = p.result;
   const causes = new Map((catalog.data?.causes ?? []).map((c) => [c.id, c.label]));
   const causeLabel = (id: string) => (id === SOMETHING_ELSE_ID ? (catalog.data?.somethingElse.label ?? 'Something else') : (causes.get(id) ?? id));
+  const symptoms = new Map((catalog.data?.symptoms ?? []).map((s) => [s.id, s.label]));
 
   return (
     <Page
@@ -206,7 +207,7 @@ export function ProposalPage() {
             <p className="fw-muted fw-small fw-rs-lead">
               How much each rule, when it fires, raises (above 1) or lowers (below 1) the odds of its cause.
             </p>
-            <DiffTable id="rs-rules" rows={ruleRows(r.rules)} causeLabel={causeLabel} kind="rule" />
+            <DiffTable id="rs-rules" rows={ruleRows(r.rules)} causeLabel={causeLabel} symptomLabel={(id) => symptoms.get(id)} kind="rule" />
           </Card>
         </>
       )}

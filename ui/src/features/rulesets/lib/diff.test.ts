@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { filterRows, formatChange, formatWeight, sortRows, type DiffRow } from './diff';
+import { filterRows, formatChange, formatWeight, ruleLabel, sortRows, type DiffRow } from './diff';
 import { compareVersions, nextVersion } from './versions';
 
 const row = (id: string, o: Partial<DiffRow> = {}): DiffRow => ({
@@ -38,16 +38,26 @@ describe('proposal diff', () => {
     expect(filterRows(rows, 'all', 'routed UP', label).map((r) => r.id)).toEqual(['fuel-from-vents--vent-lines-off']);
     expect(filterRows(rows, 'all', 'foam hesitation', label).map((r) => r.id)).toEqual(['hesitation--foam-degraded']);
     expect(filterRows(rows, 'changed', 'vent', label)).toEqual([]);
+    expect(filterRows(rows, 'all', 'stutters', label, (r) => (r.id.startsWith('hesitation') ? 'Hesitates or stutters' : '')).map((r) => r.id)).toEqual(['hesitation--foam-degraded']);
   });
 
   it('writes weights with three significant digits and moves as signed percents', () => {
     expect(formatWeight(0.065712)).toBe('0.0657');
     expect(formatWeight(4.4649)).toBe('4.46');
     expect(formatWeight(12)).toBe('12');
+    expect(formatWeight(5.47e-294)).toBe('< 0.0001');
+    expect(formatWeight(3e7)).toBe('> 100000');
     expect(formatChange(0.05, 0.0657)).toBe('+31 %');
     expect(formatChange(4, 3)).toBe('−25 %');
     expect(formatChange(2, 2.001)).toBe('0 %');
     expect(formatChange(0, 1)).toBe('—');
+  });
+
+  it('names rules in words: a symptom’s label (with its detail), or the fact', () => {
+    const symptom = (id: string) => (id === 'hesitation' ? 'Hesitates or stutters' : undefined);
+    expect(ruleLabel('hesitation--foam-degraded', symptom)).toBe('“Hesitates or stutters”');
+    expect(ruleLabel('hesitation--foam-degraded--corner-exit', symptom)).toBe('“Hesitates or stutters” (corner exit)');
+    expect(ruleLabel('idle-screw-recorded-backed-off', symptom)).toBe('Idle screw recorded backed off');
   });
 
   it('suggests the next minor version after the highest one published', () => {

@@ -76,23 +76,49 @@ export function sortRows(rows: readonly DiffRow[]): DiffRow[] {
 
 export type DiffShow = 'changed' | 'disagrees' | 'all';
 
-/** Rows shown for a choice and a search text (matches the id, the cause id or the cause's label). */
-export function filterRows(rows: readonly DiffRow[], show: DiffShow, text: string, causeLabel: (id: string) => string): DiffRow[] {
+/** Rows shown for a choice and a search text (matches the id, the cause id or label, the file, and `rowWords`). */
+export function filterRows(
+  rows: readonly DiffRow[],
+  show: DiffShow,
+  text: string,
+  causeLabel: (id: string) => string,
+  /** More words a row is found by (a rule's name in words). */
+  rowWords: (row: DiffRow) => string = () => '',
+): DiffRow[] {
   const words = text.trim().toLowerCase().split(/\s+/).filter(Boolean);
   return rows.filter((r) => {
     if (show === 'changed' && !r.changed) return false;
     if (show === 'disagrees' && !r.disagrees) return false;
     if (words.length === 0) return true;
-    const hay = `${r.id} ${r.cause} ${causeLabel(r.cause)} ${r.file ?? ''}`.toLowerCase();
+    const hay = `${r.id} ${r.cause} ${causeLabel(r.cause)} ${r.file ?? ''} ${rowWords(r)}`.toLowerCase();
     return words.every((w) => hay.includes(w));
   });
 }
 
-/** A weight with three significant digits ("0.0657", "4.46", "12.0"). */
+/** A weight with three significant digits ("0.0657", "4.46", "12"); the far tails of an interval as bounds. */
 export function formatWeight(x: number): string {
   if (!Number.isFinite(x)) return '—';
   if (x === 0) return '0';
+  if (x > 0 && x < 1e-4) return '< 0.0001';
+  if (x >= 1e5) return '> 100000';
   return Number(x.toPrecision(3)).toString();
+}
+
+/** An id as words ("fuel-older-than-a-month" -> "Fuel older than a month"). */
+export function humanizeId(id: string): string {
+  const words = id.replace(/[-_]+/g, ' ').trim();
+  return words ? words[0].toUpperCase() + words.slice(1) : id;
+}
+
+/**
+ * A rule's name in words. Rule names read `<symptom>--<cause>[--<detail>]` or name a fact
+ * (`fuel-older-than-a-month`): a known symptom becomes its label in quotes, anything else words.
+ */
+export function ruleLabel(rule: string, symptomLabel: (id: string) => string | undefined): string {
+  const [first, , detail] = rule.split('--');
+  const symptom = symptomLabel(first);
+  if (symptom) return detail ? `“${symptom}” (${humanizeId(detail).toLowerCase()})` : `“${symptom}”`;
+  return humanizeId(rule.replace(/--/g, ' '));
 }
 
 /** The move from old to proposed as a signed percent ("+31 %", "−12 %", "0 %"). */

@@ -287,6 +287,20 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     expect(figures.body.outcomes).toBe(before.body.outcomes + walkIns.length);
     expect(before.body.outcomes).toBeGreaterThanOrEqual(3);
 
+    // The shop's outcome log: its own entries, newest first, the corrected one marked.
+    await shop.goto(`${baseUrl}/outcomes`);
+    const log = shop.getByRole('list', { name: 'Outcomes' });
+    await log.getByText('Return tube pushed home and clipped').waitFor();
+    await log.getByText('Corrected', { exact: true }).waitFor();
+    expect(await shop.getByRole('button', { name: 'Download CSV' }).getAttribute('href')).toBe('/api/outcomes.csv');
+    await snap(shop, 'outcomes-log-phone');
+    await signInQuietly(admin, baseUrl, ADMIN);
+    await admin.goto(`${baseUrl}/outcomes`);
+    await admin.getByRole('list', { name: 'Outcomes' }).getByText('Return tube pushed home and clipped').waitFor();
+    // An admin reads everyone's entries and corrects none.
+    expect(await admin.getByRole('button', { name: 'Correct this entry' }).count()).toBe(0);
+    await snap(admin, 'outcomes-log-admin-desktop');
+
     await shop.goto(`${baseUrl}/insights`);
     const counts = shop.getByRole('region', { name: 'Counts' });
     await counts.getByText(String(figures.body.outcomes), { exact: true }).first().waitFor();

@@ -14,6 +14,7 @@ describe('work order page (shop)', () => {
       'GET /auth/me': meReply(shop),
       'GET /work-orders': () => ({ status: 200, body: { workOrders: [workOrder({ status: outcomes.length ? 'done' : 'open', outcomes: outcomes.length })] } }),
       'GET /catalog': { status: 200, body: CATALOG },
+      'POST /diagnosis/rank': { status: 200, body: { causes: [{ id: 'fuel-level-high', probability: 0.3 }, { id: 'vent-lines-off', probability: 0.2 }] } },
       'GET /outcomes': () => ({ status: 200, body: { outcomes, total: outcomes.filter((o) => o.current).length } }),
       'POST /outcomes': (init) => {
         const body = JSON.parse(String(init.body)) as LogOutcomeRequest;
@@ -34,9 +35,15 @@ describe('work order page (shop)', () => {
     await user.click(within(form).getByRole('button', { name: 'Log the outcome' }));
     expect(within(form).getByText('Pick what was really wrong (or “Something else”).')).toBeInTheDocument();
     expect(within(form).getByText('Say what fixed it.')).toBeInTheDocument();
-    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+    expect(calls.filter((c) => c.path === '/outcomes' && c.method === 'POST')).toEqual([]);
 
-    // A walk-in has no ranking: every cause is listed.
+    // The causes the ranking puts first for these symptoms lead; the rest wait behind "Show all".
+    expect(within(form).getAllByRole('checkbox').map((b) => b.closest('label')?.querySelector('strong')?.textContent)).toEqual([
+      'Fuel level too high',
+      'Vent lines missing or not routed up',
+      'Something else',
+    ]);
+    expect(within(form).getByRole('button', { name: 'Show all 3 causes' })).toBeInTheDocument();
     await user.click(within(form).getByRole('checkbox', { name: /^Vent lines missing or not routed up/ }));
     await user.type(within(form).getByLabelText('What fixed it'), 'Fitted vent lines');
     // The server's field message shows under the field.

@@ -10,6 +10,7 @@ import { useNotify } from '../../../components/toaster';
 import { useCatalog } from '../api/get-catalog';
 import { useOutcomes } from '../api/get-outcomes';
 import { useWorkOrders } from '../api/get-work-orders';
+import { useRankSymptoms } from '../api/rank-symptoms';
 import { formatDateTime, labelsFrom } from '../lib/labels';
 import { OutcomeForm } from './outcome-form';
 import { OutcomeHistory } from './outcome-history';
@@ -22,6 +23,8 @@ export function WorkOrderPage() {
   const orders = useWorkOrders();
   const catalog = useCatalog();
   const outcomes = useOutcomes();
+  const w0 = orders.data?.find((x) => x.id === workOrderId);
+  const ranking = useRankSymptoms(w0?.symptoms ?? [], w0 !== undefined);
   const notify = useNotify();
   const labels = labelsFrom(catalog.data);
 
@@ -109,8 +112,15 @@ export function WorkOrderPage() {
           <OutcomeHistory outcomes={entries} labels={labels} catalog={catalog.data} target={{ workOrderId: w.id }} canCorrect onLogged={logged} />
         )}
         {catalog.isError && <Callout intent="danger">The list of causes could not be loaded: {catalog.error.message}</Callout>}
-        {!hasCurrent && outcomes.isSuccess && catalog.data && (
-          <OutcomeForm idPrefix="wo-outcome" target={{ workOrderId: w.id }} catalog={catalog.data} onLogged={logged} />
+        {!hasCurrent && outcomes.isSuccess && catalog.data && ranking.fetchStatus === 'idle' && (
+          // Shown once the ranking has answered (or failed), so the likely causes come first.
+          <OutcomeForm
+            idPrefix="wo-outcome"
+            target={{ workOrderId: w.id }}
+            catalog={catalog.data}
+            likely={ranking.data?.causes.slice(0, 5).map((c) => c.id)}
+            onLogged={logged}
+          />
         )}
       </Card>
     </Page>

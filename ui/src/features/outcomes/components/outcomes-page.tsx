@@ -102,11 +102,14 @@ export function OutcomesPage() {
       />
     );
   else {
-    const list = outcomes.data.outcomes;
+    // Newest first whatever order the server sends them in.
+    const list = [...outcomes.data.outcomes].sort((a, b) => b.at.localeCompare(a.at));
+    const filtered = Boolean(filter.from || filter.to || filter.version);
     body = (
       <>
         <p className="fw-muted fw-result-count" role="status">
-          {outcomes.data.total.toLocaleString()} current {outcomes.data.total === 1 ? 'entry' : 'entries'} in the period
+          {outcomes.data.total.toLocaleString()} current {outcomes.data.total === 1 ? 'entry' : 'entries'}
+          {filtered ? ' in the period' : ''}
           {list.length < outcomes.data.total || list.length > shown
             ? `; the newest ${Math.min(shown, list.length)} shown here (download the CSV for all)`
             : ''}

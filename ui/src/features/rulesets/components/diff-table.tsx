@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, HTMLTable, InputGroup, SegmentedControl, Tag } from '@blueprintjs/core';
 import { SearchIcon } from '@blueprintjs/icons';
-import { filterRows, formatChange, formatWeight, ruleLabel, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
+import { filterRows, formatChange, formatInterval, formatWeight, ruleLabel, sortRows, type DiffRow, type DiffShow } from '../lib/diff';
 
 const PAGE = 20;
 
@@ -68,7 +68,7 @@ export function DiffTable({
       </p>
       {shown.length > 0 && (
         <div className="fw-rs-scroll">
-          <HTMLTable compact striped className="fw-rs-table fw-rs-diff-table" aria-labelledby={id}>
+          <HTMLTable compact striped bordered={false} className="fw-rs-table fw-rs-diff-table" aria-labelledby={id}>
             <thead>
               <tr>
                 <th scope="col">{kind === 'prior' ? 'Cause' : 'Rule'}</th>
@@ -101,9 +101,7 @@ export function DiffTable({
                       {r.outcomes.toLocaleString()} {r.outcomes === 1 ? 'outcome' : 'outcomes'}
                       {r.causeOutcomes !== undefined && <span className="fw-muted fw-small"> ({formatWeight(r.causeOutcomes)} of its cause)</span>}
                     </div>
-                    <div className="fw-small">
-                      90 % interval {formatWeight(r.interval[0])}–{formatWeight(r.interval[1])}
-                    </div>
+                    <div className="fw-small">90 % interval {formatInterval(r.interval)}</div>
                     <div className="fw-rs-tags">
                       {r.disagrees && (
                         <Tag minimal round intent="warning">

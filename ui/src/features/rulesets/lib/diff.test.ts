@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { filterRows, formatChange, formatWeight, ruleLabel, sortRows, type DiffRow } from './diff';
+import { filterRows, formatChange, formatInterval, formatWeight, ruleLabel, sortRows, type DiffRow } from './diff';
 import { compareVersions, nextVersion } from './versions';
 
 const row = (id: string, o: Partial<DiffRow> = {}): DiffRow => ({
@@ -47,6 +47,11 @@ describe('proposal diff', () => {
     expect(formatWeight(12)).toBe('12');
     expect(formatWeight(5.47e-294)).toBe('< 0.0001');
     expect(formatWeight(3e7)).toBe('> 100000');
+    expect(formatInterval([0.0196, 0.188])).toBe('0.0196–0.188');
+    expect(formatInterval([2e-30, 0.0242])).toBe('up to 0.0242');
+    expect(formatInterval([0, 1e-5])).toBe('below 0.0001');
+    expect(formatInterval([0.5, 3e6])).toBe('0.5 or more');
+    expect(formatInterval([1e-9, 3e6])).toBe('too wide to bound (too few outcomes)');
     expect(formatChange(0.05, 0.0657)).toBe('+31 %');
     expect(formatChange(4, 3)).toBe('−25 %');
     expect(formatChange(2, 2.001)).toBe('0 %');

@@ -104,6 +104,16 @@ export function formatWeight(x: number): string {
   return Number(x.toPrecision(3)).toString();
 }
 
+/** A credible interval in words where a tail runs off the scale ("0.0196–0.188", "up to 0.0242", "too few outcomes to bound"). */
+export function formatInterval([lo, hi]: readonly [number, number]): string {
+  const low = !(lo >= 1e-4);
+  const high = hi >= 1e5;
+  if (low && high) return 'too wide to bound (too few outcomes)';
+  if (low) return hi < 1e-4 ? 'below 0.0001' : `up to ${formatWeight(hi)}`;
+  if (high) return `${formatWeight(lo)} or more`;
+  return `${formatWeight(lo)}–${formatWeight(hi)}`;
+}
+
 /** An id as words ("fuel-older-than-a-month" -> "Fuel older than a month"). */
 export function humanizeId(id: string): string {
   const words = id.replace(/[-_]+/g, ' ').trim();

@@ -48,7 +48,7 @@ export function ReliabilityChart({ points, topOnly = false }: { points: readonly
       </ul>
       <div className="fw-ins-chart-plot">
         <ResponsiveContainer width="100%" height={phone ? 300 : 360}>
-          <ComposedChart data={[...points]} margin={{ top: 8, right: 16, bottom: 28, left: 8 }}>
+          <ComposedChart data={[...points]} margin={{ top: 8, right: 16, bottom: 28, left: phone ? 0 : 20 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="var(--fw-ins-grid)" />
             <XAxis
               type="number"

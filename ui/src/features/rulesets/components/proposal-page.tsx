@@ -160,6 +160,9 @@ export function ProposalPage() {
           </Tag>
         </H2>
         <Progress p={p} />
+        {p.status === 'running' && (
+          <p className="fw-muted fw-small fw-rs-lead">The fit runs on the server: you can leave this page and come back to its address.</p>
+        )}
         {p.status === 'failed' && (
           <Callout intent="danger" title="The fit stopped">
             {p.error ?? 'No reason was given.'}

@@ -53,7 +53,8 @@ function Row({ o, labels, canCorrect }: { o: OutcomeDto; labels: Labels; canCorr
             labels={labels}
             actions={
               <span className="fw-oc-tags">
-                <Where o={o} />
+                {/* The work order and the shared case are the shop's to open. */}
+                {canCorrect && <Where o={o} />}
                 {canCorrect && o.current && target && (
                   <Button className="fw-touch" variant="outlined" icon={<EditIcon />} text="Correct this entry" onClick={() => setCorrecting(true)} />
                 )}

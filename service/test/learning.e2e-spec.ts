@@ -40,6 +40,9 @@ describe('outcomes, insights and ruleset versions', () => {
     const list = (await admin.get('/api/outcomes')).body.outcomes;
     expect(list.find((o: { id: string }) => o.id === first.id)).toMatchObject({ current: false, confirmedCauses: ['fuel-level-high'] });
     expect(list.find((o: { id: string }) => o.id === fixed.body.id).current).toBe(true);
+    // Newest first.
+    const stamps = list.map((o: { at: string }) => o.at);
+    expect([...stamps].sort().reverse()).toEqual(stamps);
     // Insights count the correction, not the corrected entry.
     const pairs = (await admin.get('/api/insights')).body.insights.confirmed.map((x: { cause: string }) => x.cause);
     expect(pairs).toContain('return-tube-loose');

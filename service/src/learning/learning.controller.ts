@@ -3,7 +3,7 @@ import { CommandBus } from '@nestjs/cqrs';
 import { ApiTags } from '@nestjs/swagger';
 import { stringify } from 'csv-stringify';
 import type { Response } from 'express';
-import { inArray } from 'drizzle-orm';
+import { and, desc, inArray } from 'drizzle-orm';
 import { Inject } from '@nestjs/common';
 import { outcomes, users, type Db } from '@fuelwright/db';
 import type { OutcomeDto, ProposalDto, WorkOrderDto } from '@fuelwright/shared';
@@ -58,11 +58,12 @@ export class LearningController {
   @Roles('shop', 'admin')
   async listOutcomes(@CurrentUser() user: SessionUser, @QueryParams() q: PeriodDto): Promise<{ outcomes: OutcomeDto[]; total: number }> {
     const f = { ...q, loggedBy: user.role === 'shop' ? user.id : undefined };
-    const rows = [];
-    for await (const r of this.repo.rows(f, false)) {
-      rows.push(r);
-      if (rows.length >= 200) break;
-    }
+    const rows = await this.db
+      .select()
+      .from(outcomes)
+      .where(and(...this.repo.where(f, false)))
+      .orderBy(desc(outcomes.at), desc(outcomes.id))
+      .limit(200);
     const superseded = new Set(
       rows.length ? (await this.db.select({ id: outcomes.supersedesId }).from(outcomes).where(inArray(outcomes.supersedesId, rows.map((r) => r.id)))).map((r) => r.id) : [],
     );

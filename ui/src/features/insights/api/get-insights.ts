@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { periodQueryString, type PeriodFilter } from '../lib/period';
+import { periodQueryString, type PeriodFilter } from '../../../lib/period';
 
 /*
  * The insight figures as the server sends them (computed by the rules package's metric

@@ -22,7 +22,7 @@ import {
   type InsightTable,
   type Labels,
 } from '../lib/format';
-import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../lib/period';
+import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../../../lib/period';
 import { PeriodFilter } from './period-filter';
 import { ReliabilityChart } from './reliability-chart';
 import '../insights.css';

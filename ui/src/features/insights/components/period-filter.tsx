@@ -1,6 +1,6 @@
 import { Button, FormGroup, HTMLSelect } from '@blueprintjs/core';
 import { TextField } from '../../../components/text-field';
-import type { PeriodFilter as Filter } from '../lib/period';
+import type { PeriodFilter as Filter } from '../../../lib/period';
 
 /**
  * From, to and ruleset version. Each change applies at once (the page keeps the filter in its

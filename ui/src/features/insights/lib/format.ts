@@ -1,7 +1,7 @@
 import { SOMETHING_ELSE_ID, type CatalogResponse } from '@fuelwright/shared';
 import { API_BASE } from '../../../lib/api-client';
 import type { Calibration } from '../api/get-insights';
-import { periodQueryString, type PeriodFilter } from './period';
+import { periodQueryString, type PeriodFilter } from '../../../lib/period';
 
 /** A share as a whole percent ("45 %"); a dash when there is none. */
 export function formatPercent(x: number | null | undefined, digits = 0): string {

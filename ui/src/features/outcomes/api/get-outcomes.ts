@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { OutcomeDto } from '@fuelwright/shared';
 import { api } from '../../../lib/api-client';
-import { periodQueryString, type PeriodFilter } from '../lib/period';
+import { periodQueryString, type PeriodFilter } from '../../../lib/period';
 
 export interface OutcomeList {
   /** The newest entries (at most 200; the CSV export has them all). */

@@ -13,7 +13,7 @@ import { useCatalog } from '../api/get-catalog';
 import { useOutcomes } from '../api/get-outcomes';
 import { useRulesetVersions } from '../api/get-ruleset-versions';
 import { labelsFrom, type Labels } from '../lib/labels';
-import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../lib/period';
+import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../../../lib/period';
 import { OutcomeEntry } from './outcome-entry';
 import { OutcomeForm } from './outcome-form';
 import { PeriodFilter } from './period-filter';

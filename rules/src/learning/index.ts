@@ -45,6 +45,12 @@ export {
   type WrongWayRules,
   type Insights,
   type InsightsOptions,
+  type InsightsState,
+  type AccuracyState,
+  type CalibrationState,
+  type SymptomCauseState,
+  type LabourState,
+  type WrongWayState,
 } from './metrics.js';
 export {
   proposeRuleset,

@@ -291,4 +291,47 @@ describe('insights accumulator', () => {
     for (const o of outcomes.slice(1)) acc.add(o);
     expect(acc.result()).toEqual(computeInsights(ruleset, outcomes));
   });
+
+  it('merges the JSON states of parts into what one pass over the whole gives', () => {
+    const whole = computeInsights(ruleset, outcomes);
+    // Each outcome alone, through JSON (as the stored roll-ups are), merged in reverse order.
+    const merged = new InsightsAccumulator(ruleset);
+    for (const o of [...outcomes].reverse()) {
+      const part = new InsightsAccumulator(ruleset);
+      part.add(o);
+      merged.merge(JSON.parse(JSON.stringify(part.state())));
+    }
+    // Nothing added at all merges as nothing.
+    merged.merge(new InsightsAccumulator(ruleset).state());
+    const r = merged.result();
+    expect(r).toEqual({ ...whole, accuracy: { ...whole.accuracy, brier: expect.closeTo(whole.accuracy.brier, 12) }, labourByCause: expect.any(Array), calibration: expect.any(Object), topLabelCalibration: expect.any(Object) });
+    expect(r.calibration.bins.map((b) => b.count)).toEqual(whole.calibration.bins.map((b) => b.count));
+    r.calibration.bins.forEach((b, i) => {
+      if (!b.count) return;
+      expect(b.meanPredicted).toBeCloseTo(whole.calibration.bins[i].meanPredicted, 12);
+      expect(b.observed).toBeCloseTo(whole.calibration.bins[i].observed, 12);
+    });
+    expect(r.topLabelCalibration).toEqual(whole.topLabelCalibration);
+    // Labour a: 30 and 50 merged pairwise (Chan, Golub and LeVeque 1979): mean 40, sd sqrt(200) = 14.142...
+    const a = r.labourByCause.find((x) => x.cause === 'cause-a')!;
+    expect(a).toMatchObject({ outcomes: 2, meanMinutes: 40, minMinutes: 30, maxMinutes: 50 });
+    expect(a.sdMinutes).toBeCloseTo(Math.sqrt(200), 12);
+    expect(r.labourByCause.map((x) => x.cause)).toEqual(whole.labourByCause.map((x) => x.cause));
+  });
+
+  it('merges labour statistics pairwise like one pass: 10, 20 | 30, 40, 50 -> mean 30, sd sqrt(250)', () => {
+    // Sample variance of 10..50 step 10: sum of squared deviations 1000 over 4 = 250 (by hand).
+    const left = new LabourAccumulator();
+    [10, 20].forEach((m) => left.add(['x'], m));
+    const right = new LabourAccumulator();
+    [30, 40, 50].forEach((m) => right.add(['x'], m));
+    left.merge(right.state());
+    expect(left.result()[0]).toMatchObject({ outcomes: 5, meanMinutes: 30, minMinutes: 10, maxMinutes: 50 });
+    expect(left.result()[0].sdMinutes).toBeCloseTo(Math.sqrt(250), 12);
+  });
+
+  it('refuses to merge the state of another ruleset version', () => {
+    const other = new InsightsAccumulator(ruleset).state();
+    expect(() => new InsightsAccumulator(ruleset).merge({ ...other, rulesetVersion: 'tiny-2' })).toThrow(/tiny-2/);
+  });
 });

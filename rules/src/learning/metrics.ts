@@ -59,6 +59,13 @@ export interface RankingAccuracy {
   brier: number;
 }
 
+export interface AccuracyState {
+  n: number;
+  hits1: number;
+  hits3: number;
+  brierSum: number;
+}
+
 /** Top-1, top-3 and Brier score over rankings. */
 export class AccuracyAccumulator {
   private n = 0;
@@ -81,6 +88,19 @@ export class AccuracyAccumulator {
       }
     }
     this.brierSum += brierScore(sorted, targets);
+  }
+
+  /** The counters as plain JSON (for a stored roll-up). */
+  state(): AccuracyState {
+    return { n: this.n, hits1: this.hits1, hits3: this.hits3, brierSum: this.brierSum };
+  }
+
+  /** Adds the counters of another accumulator's `state()`. */
+  merge(s: AccuracyState): void {
+    this.n += s.n;
+    this.hits1 += s.hits1;
+    this.hits3 += s.hits3;
+    this.brierSum += s.brierSum;
   }
 
   result(): RankingAccuracy {
@@ -115,6 +135,13 @@ export function calibrationBinIndex(p: number, bins: number): number {
   return Math.min(bins - 1, Math.floor(p * bins));
 }
 
+/** Per bin: predictions, and the sums of their predicted and observed values. */
+export interface CalibrationState {
+  count: number[];
+  sumP: number[];
+  sumY: number[];
+}
+
 /** Reliability bins: predicted probability against observed frequency. */
 export class CalibrationAccumulator {
   private readonly count: Float64Array;
@@ -142,6 +169,19 @@ export class CalibrationAccumulator {
     for (const [id, y] of targets) if (!listed(ranking, id)) this.addPrediction(0, y);
   }
 
+  state(): CalibrationState {
+    return { count: [...this.count], sumP: [...this.sumP], sumY: [...this.sumY] };
+  }
+
+  merge(s: CalibrationState): void {
+    if (s.count.length !== this.bins) throw new RangeError(`cannot merge ${s.count.length} calibration bins into ${this.bins}`);
+    for (let i = 0; i < this.bins; i++) {
+      this.count[i] += s.count[i];
+      this.sumP[i] += s.sumP[i];
+      this.sumY[i] += s.sumY[i];
+    }
+  }
+
   result(): Calibration {
     let total = 0;
     for (let i = 0; i < this.bins; i++) total += this.count[i];
@@ -167,6 +207,8 @@ export interface SymptomCausePair {
   shareOfSymptom: number;
 }
 
+export type SymptomCauseState = Record<string, { total: number; causes: Record<string, number> }>;
+
 /** How often each reported symptom went with each confirmed cause. */
 export class SymptomCauseAccumulator {
   private readonly pairs = new Map<string, Map<string, number>>();
@@ -179,6 +221,22 @@ export class SymptomCauseAccumulator {
       let row = this.pairs.get(s);
       if (!row) this.pairs.set(s, (row = new Map()));
       for (const c of causes) row.set(c, (row.get(c) ?? 0) + 1);
+    }
+  }
+
+  /** symptom -> { total: outcomes reporting it, causes: cause -> outcomes }. */
+  state(): SymptomCauseState {
+    const out: SymptomCauseState = {};
+    for (const [symptom, row] of this.pairs) out[symptom] = { total: this.bySymptom.get(symptom)!, causes: Object.fromEntries(row) };
+    return out;
+  }
+
+  merge(s: SymptomCauseState): void {
+    for (const [symptom, { total, causes }] of Object.entries(s)) {
+      this.bySymptom.set(symptom, (this.bySymptom.get(symptom) ?? 0) + total);
+      let row = this.pairs.get(symptom);
+      if (!row) this.pairs.set(symptom, (row = new Map()));
+      for (const [c, n] of Object.entries(causes)) row.set(c, (row.get(c) ?? 0) + n);
     }
   }
 
@@ -205,6 +263,9 @@ export interface LabourByCause {
   maxMinutes: number;
 }
 
+/** Per cause: count, running mean, sum of squared deviations (Welford's M2), min and max. */
+export type LabourState = Record<string, { n: number; mean: number; m2: number; min: number; max: number }>;
+
 /** Mean labour minutes per confirmed cause (Welford's running mean and variance). */
 export class LabourAccumulator {
   private readonly stats = new Map<string, { n: number; mean: number; m2: number; min: number; max: number }>();
@@ -220,6 +281,35 @@ export class LabourAccumulator {
       s.m2 += d * (minutes - s.mean);
       s.min = Math.min(s.min, minutes);
       s.max = Math.max(s.max, minutes);
+    }
+  }
+
+  state(): LabourState {
+    const out: LabourState = {};
+    for (const [c, s] of this.stats) out[c] = { n: s.n, mean: s.mean, m2: s.m2, min: s.min, max: s.max };
+    return out;
+  }
+
+  /**
+   * Combines another accumulator's running mean and variance with these (Chan, Golub and LeVeque
+   * 1979, the pairwise update): n = na + nb, d = mean_b - mean_a, mean = mean_a + d nb / n,
+   * M2 = M2_a + M2_b + d^2 na nb / n.
+   */
+  merge(other: LabourState): void {
+    for (const [c, b] of Object.entries(other)) {
+      if (!b.n) continue;
+      const a = this.stats.get(c);
+      if (!a) {
+        this.stats.set(c, { ...b });
+        continue;
+      }
+      const n = a.n + b.n;
+      const d = b.mean - a.mean;
+      a.mean += (d * b.n) / n;
+      a.m2 += b.m2 + (d * d * a.n * b.n) / n;
+      a.n = n;
+      a.min = Math.min(a.min, b.min);
+      a.max = Math.max(a.max, b.max);
     }
   }
 
@@ -248,6 +338,11 @@ export interface WrongWayRules {
   rules: WrongWayRule[];
   /** Fired rule names the ruleset does not know (renamed or from another version). */
   unknownRuleFirings: number;
+}
+
+export interface WrongWayState {
+  rules: Record<string, [fired: number, wrongWay: number]>;
+  unknown: number;
 }
 
 /**
@@ -287,6 +382,27 @@ export class WrongWayRulesAccumulator {
       r.fired++;
       const isConfirmed = confirmed.has(r.cause);
       if (r.lr > 1 ? !isConfirmed : isConfirmed) r.wrong++;
+    }
+  }
+
+  /** Rule name -> [fired, wrong way], for the rules that fired; and the unknown firings. */
+  state(): WrongWayState {
+    const rules: Record<string, [number, number]> = {};
+    for (const [name, r] of this.byName) if (r.fired) rules[name] = [r.fired, r.wrong];
+    return { rules, unknown: this.unknown };
+  }
+
+  /** Adds another accumulator's counts (for the same ruleset; names it does not know count as unknown). */
+  merge(s: WrongWayState): void {
+    this.unknown += s.unknown;
+    for (const [name, [fired, wrong]] of Object.entries(s.rules)) {
+      const r = this.byName.get(name);
+      if (!r) {
+        this.unknown += fired;
+        continue;
+      }
+      r.fired += fired;
+      r.wrong += wrong;
     }
   }
 
@@ -330,6 +446,24 @@ export interface Insights {
   wrongWayRules: WrongWayRules;
   /** Confirmations per hypothesis (an outcome with two causes counts for both), most first. */
   confirmed: { cause: string; outcomes: number }[];
+  stillFixed: { yes: number; no: number; unknown: number };
+}
+
+/** An InsightsAccumulator's counters as plain JSON (see `InsightsAccumulator.state`). */
+export interface InsightsState {
+  rulesetVersion: string;
+  bins: number;
+  n: number;
+  skipped: number;
+  withCase: number;
+  ranked: number;
+  accuracy: AccuracyState;
+  calibration: CalibrationState;
+  topLabel: CalibrationState;
+  pairs: SymptomCauseState;
+  labour: LabourState;
+  wrongWay: WrongWayState;
+  confirmed: Record<string, number>;
   stillFixed: { yes: number; no: number; unknown: number };
 }
 
@@ -386,6 +520,49 @@ export class InsightsAccumulator {
       this.topLabel.addPrediction(sorted[0].probability, targets.has(sorted[0].id) ? 1 : 0);
       this.wrongWay.add(open.firedRules, new Set(confirmed), outcome.setup?.carburettorKind);
     }
+  }
+
+  /**
+   * Everything added so far as plain JSON: stored per day and per month as roll-ups, and merged
+   * back with `merge` (every figure is a sum of per-outcome terms, so the merge of two parts equals
+   * one pass over both, up to floating-point rounding).
+   */
+  state(): InsightsState {
+    return {
+      rulesetVersion: this.ruleset.version,
+      bins: this.calibration.bins,
+      n: this.n,
+      skipped: this.skippedN,
+      withCase: this.withCaseN,
+      ranked: this.rankedN,
+      accuracy: this.accuracy.state(),
+      calibration: this.calibration.state(),
+      topLabel: this.topLabel.state(),
+      pairs: this.pairs.state(),
+      labour: this.labour.state(),
+      wrongWay: this.wrongWay.state(),
+      confirmed: Object.fromEntries(this.confirmed),
+      stillFixed: { ...this.still },
+    };
+  }
+
+  /** Adds a `state()` taken with the same ruleset version and number of bins. */
+  merge(s: InsightsState): void {
+    if (s.rulesetVersion !== this.ruleset.version) throw new RangeError(`cannot merge insights of version ${s.rulesetVersion} into ${this.ruleset.version}`);
+    this.n += s.n;
+    this.skippedN += s.skipped;
+    this.withCaseN += s.withCase;
+    this.rankedN += s.ranked;
+    this.accuracy.merge(s.accuracy);
+    this.calibration.merge(s.calibration);
+    this.topLabel.merge(s.topLabel);
+    this.pairs.merge(s.pairs);
+    this.labour.merge(s.labour);
+    this.wrongWay.merge(s.wrongWay);
+    for (const [c, n] of Object.entries(s.confirmed)) this.confirmed.set(c, (this.confirmed.get(c) ?? 0) + n);
+    this.still.yes += s.stillFixed.yes;
+    this.still.no += s.stillFixed.no;
+    this.still.unknown += s.stillFixed.unknown;
   }
 
   result(): Insights {

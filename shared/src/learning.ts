@@ -18,6 +18,8 @@ export interface WorkOrderDto {
   customerName: string;
   kartDescription: string;
   symptoms: SymptomReport[];
+  /** The setup the kart came in with: the case's at the time, or what the shop entered for a walk-in (may be empty). */
+  setup: SetupSnapshot;
   status: 'open' | 'done';
   notes: string;
   createdAt: string;
@@ -60,6 +62,11 @@ export interface OutcomeDto {
   at: string;
 }
 
+/** GET /api/cases/:id/outcomes: every entry logged on the case, newest first, corrected ones with `current: false`. */
+export interface CaseOutcomesResponse {
+  outcomes: OutcomeDto[];
+}
+
 export interface StartProposalRequest {
   /** Pseudo-count of the expert values: how many outcomes' worth of weight the current priors and ratios keep. */
   strength: number;
@@ -84,3 +91,26 @@ export interface ProposalDto {
   /** When ready: the diff (old, proposed, evidence) and the back-test, as computed by the rules package. */
   result: unknown;
 }
+
+/** One ruleset's accuracy on a proposal's held-out outcomes (shares 0..1). */
+export interface BackTestFigures {
+  top1Rate: number;
+  top3Rate: number;
+  /** Mean Brier score; null when nothing was ranked. */
+  brier: number | null;
+}
+
+/** A proposal in the list: no diff and no evidence, only the back-test's headline figures once ready. */
+export interface ProposalSummaryDto extends Omit<ProposalDto, 'result'> {
+  /** Who started it (null when that account is gone). */
+  createdByName: string | null;
+  /** Ready and published proposals: before (base version) and after (proposed weights). */
+  backTest: { heldOut: number; scored: number; before: BackTestFigures; after: BackTestFigures } | null;
+}
+
+/** GET /api/rulesets/proposals: the newest proposals first (at most PROPOSAL_LIST_LIMIT). */
+export interface ProposalListResponse {
+  proposals: ProposalSummaryDto[];
+}
+
+export const PROPOSAL_LIST_LIMIT = 50;

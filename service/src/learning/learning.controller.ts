@@ -1,12 +1,12 @@
 import { Body, Controller, Get, HttpCode, Post, Query as QueryParams, Res } from '@nestjs/common';
-import { CommandBus } from '@nestjs/cqrs';
+import { CommandBus, QueryBus } from '@nestjs/cqrs';
 import { ApiTags } from '@nestjs/swagger';
 import { stringify } from 'csv-stringify';
 import type { Response } from 'express';
 import { and, desc, inArray } from 'drizzle-orm';
 import { Inject } from '@nestjs/common';
 import { outcomes, users, type Db } from '@fuelwright/db';
-import type { OutcomeDto, ProposalDto, WorkOrderDto } from '@fuelwright/shared';
+import type { CaseOutcomesResponse, OutcomeDto, ProposalDto, ProposalListResponse, WorkOrderDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -15,6 +15,8 @@ import type { SessionUser } from '../common/session-user.js';
 import { DiagnosisService, type RulesetVersionInfo } from '../diagnosis/diagnosis.service.js';
 import { CreateWorkOrderDto, InsightTableDto, LogOutcomeDto, PeriodDto, PublishDto, StartProposalDto } from './dto/learning.dto.js';
 import { LogOutcomeCommand } from './commands/log-outcome.command.js';
+import { ListCaseOutcomesQuery } from './queries/list-case-outcomes.query.js';
+import { ListProposalsQuery } from './queries/list-proposals.query.js';
 import { InsightsService, type InsightsResponse } from './insights.service.js';
 import { OutcomeRepository } from './outcome-repository.js';
 import { toOutcomeDto } from './outcome-dto.js';
@@ -27,6 +29,7 @@ import { Param } from '@nestjs/common';
 export class LearningController {
   constructor(
     private readonly commands: CommandBus,
+    private readonly queries: QueryBus,
     private readonly workOrders: WorkOrdersService,
     private readonly repo: OutcomeRepository,
     private readonly insights: InsightsService,
@@ -51,6 +54,12 @@ export class LearningController {
   @Post('outcomes')
   logOutcome(@CurrentUser() user: SessionUser, @Body() dto: LogOutcomeDto): Promise<OutcomeDto> {
     return this.commands.execute(new LogOutcomeCommand(user, dto));
+  }
+
+  /** What was logged on a case, for whoever may read the case (its owner, a coach or shop it is shared with); 404 for anyone else. */
+  @Get('cases/:id/outcomes')
+  async caseOutcomes(@CurrentUser() user: SessionUser, @UuidParam('id', 'case') id: string): Promise<CaseOutcomesResponse> {
+    return { outcomes: await this.queries.execute(new ListCaseOutcomesQuery(user, id)) };
   }
 
   /** The newest outcomes (a shop sees its own, an admin all), at most 200: the full set is in the CSV export. */
@@ -127,6 +136,13 @@ export class LearningController {
   @Roles('shop', 'admin')
   startProposal(@CurrentUser() user: SessionUser, @Body() dto: StartProposalDto): Promise<ProposalDto> {
     return this.proposals.start(user.id, dto);
+  }
+
+  /** The newest proposals first, without their diffs (open one for that). */
+  @Get('rulesets/proposals')
+  @Roles('shop', 'admin')
+  async listProposals(): Promise<ProposalListResponse> {
+    return { proposals: await this.queries.execute(new ListProposalsQuery()) };
   }
 
   @Get('rulesets/proposals/:id')

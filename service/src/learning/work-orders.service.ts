@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { desc, eq, sql } from 'drizzle-orm';
 import { workOrders, type Db, type WorkOrderRow } from '@fuelwright/db';
-import type { CreateWorkOrderRequest, SymptomReport, WorkOrderDto } from '@fuelwright/shared';
+import type { CreateWorkOrderRequest, SetupSnapshot, SymptomReport, WorkOrderDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { AccessPolicy } from '../common/access/access-policy.js';
 import { FieldsBadRequest } from '../common/validation.js';
@@ -15,6 +15,7 @@ const toDto = (r: WorkOrderRow, n: number): WorkOrderDto => ({
   customerName: r.customerName,
   kartDescription: r.kartDescription,
   symptoms: r.symptoms as SymptomReport[],
+  setup: (r.setup ?? {}) as SetupSnapshot,
   status: r.status,
   notes: r.notes,
   createdAt: r.createdAt.toISOString(),

@@ -35,6 +35,7 @@ export function workOrder(overrides: Partial<WorkOrderDto> = {}): WorkOrderDto {
     customerName: 'Walk-in customer',
     kartDescription: '125 shifter',
     symptoms: [{ id: 'fuel-from-vents' }],
+    setup: {},
     status: 'open',
     notes: '',
     createdAt: '2026-11-20T09:00:00.000Z',

@@ -1,4 +1,4 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { boolean, date, doublePrecision, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { cases } from './cases.js';
 import { karts } from './karts.js';
 import { users } from './users.js';
@@ -89,6 +89,43 @@ export const outcomes = pgTable(
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('outcomes_version_at_idx').on(t.rulesetVersion, t.at), index('outcomes_case_id_idx').on(t.caseId), index('outcomes_supersedes_id_idx').on(t.supersedesId)],
+);
+
+export const insightRollupKindEnum = pgEnum('insight_rollup_kind', ['day', 'month']);
+
+/**
+ * The insight counters of one ruleset version's current outcomes over one UTC day or one calendar
+ * month (an InsightsAccumulator state, see rules/src/learning/metrics.ts). Insights for a period
+ * merge the months it covers whole and the days at its ends, instead of re-reading every outcome.
+ * Rebuilt from `outcomes` for the days in `insight_rollup_dirty`.
+ */
+export const insightRollups = pgTable(
+  'insight_rollups',
+  {
+    rulesetVersion: text('ruleset_version').notNull(),
+    kind: insightRollupKindEnum('kind').notNull(),
+    /** The day, or the first day of the month. */
+    start: date('start', { mode: 'string' }).notNull(),
+    /** Current outcomes counted. */
+    outcomes: integer('outcomes').notNull(),
+    state: jsonb('state').notNull(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.rulesetVersion, t.kind, t.start] })],
+);
+
+/**
+ * Days whose roll-ups are out of date. Triggers on `outcomes` (migration 0007) add a row for every
+ * (version, UTC day) an insert, update or delete touches, including the day of an outcome a
+ * correction supersedes; the insights service rebuilds those days and their months, then removes the rows.
+ */
+export const insightRollupDirty = pgTable(
+  'insight_rollup_dirty',
+  {
+    rulesetVersion: text('ruleset_version').notNull(),
+    day: date('day', { mode: 'string' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.rulesetVersion, t.day] })],
 );
 
 export type RulesetRow = typeof rulesets.$inferSelect;

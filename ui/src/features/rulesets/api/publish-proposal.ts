@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { proposalQueryKey, type Proposal } from './get-proposal';
+import { proposalsQueryKey } from './get-proposals';
 import { rulesetsQueryKey } from './get-rulesets';
 
 /** Screens that show the active version's catalog or figures refetch after a change of version. */
@@ -20,6 +21,7 @@ export function usePublishProposal() {
     onSettled: (_data, _error, { id }) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: proposalQueryKey(id) }),
+        queryClient.invalidateQueries({ queryKey: proposalsQueryKey }),
         queryClient.invalidateQueries({ queryKey: rulesetsQueryKey }),
         queryClient.invalidateQueries({ queryKey: catalogQueryKey }),
         queryClient.invalidateQueries({ queryKey: insightsQueryKey }),

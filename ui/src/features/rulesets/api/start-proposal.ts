@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { StartProposalRequest } from '@fuelwright/shared';
 import { api } from '../../../lib/api-client';
 import { proposalQueryKey, type Proposal } from './get-proposal';
+import { proposalsQueryKey } from './get-proposals';
 
 /**
  * POST /api/rulesets/proposals (shop, admin): starts a re-fit of the priors and likelihood ratios
@@ -16,5 +17,6 @@ export function useStartProposal() {
   return useMutation({
     mutationFn: startProposal,
     onSuccess: (p) => queryClient.setQueryData(proposalQueryKey(p.id), p),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: proposalsQueryKey }),
   });
 }

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import type { Role } from '@fuelwright/shared';
 import { menuItemsFor } from '../../../app/navigation';
 import { makeUser, meReply, mockApi, renderApp } from '../../../test-utils';
-import { proposal, RESULT } from '../test-support/fixtures';
+import { LIST_BACK_TEST, proposal, proposalSummary, RESULT } from '../test-support/fixtures';
 
 const ID = proposal().id;
 const CATALOG = {
@@ -75,6 +75,10 @@ describe('proposal page', () => {
         published = true;
         return { status: 200, body: proposal({ status: 'published', progress: 1 }) };
       },
+      'GET /rulesets/proposals': () => ({
+        status: 200,
+        body: { proposals: [proposalSummary({ status: published ? 'published' : 'ready', progress: 1, backTest: LIST_BACK_TEST })] },
+      }),
       'GET /rulesets': () => ({
         status: 200,
         body: {
@@ -102,6 +106,9 @@ describe('proposal page', () => {
     const row = await within(versions).findByRole('row', { name: /1\.1\.0/ });
     expect(row).toHaveTextContent('Active');
     expect(within(versions).getByRole('button', { name: 'Roll back to 1.0.0' })).toBeInTheDocument();
+    // The list of proposals (read after publishing) shows it as the version it became.
+    const proposals = await screen.findByRole('table', { name: 'Proposals' });
+    expect(await within(proposals).findByText('Became version 1.1.0')).toBeInTheDocument();
   });
 
   it('gives the rulesets a menu entry for admins only; shops reach them from the insights', () => {

@@ -14,10 +14,11 @@ import { useCatalog } from '../api/get-catalog';
 import { useProposal, type Accuracy, type Proposal, type ProposalResult } from '../api/get-proposal';
 import { usePublishProposal } from '../api/publish-proposal';
 import { priorRows, ruleRows } from '../lib/diff';
+import { pct } from '../lib/format';
+import { PROPOSAL_STATUS } from '../lib/proposal-status';
 import { DiffTable } from './diff-table';
 import '../rulesets.css';
 
-const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 const score = (x: number | null) => (x === null || !Number.isFinite(x) ? '—' : x.toFixed(3));
 
 function delta(before: number | null, after: number | null, asPercent: boolean, lowerIsBetter = false) {
@@ -155,8 +156,8 @@ export function ProposalPage() {
       <Card className="fw-rs-panel" role="region" aria-labelledby="rs-status">
         <H2 id="rs-status" className="fw-rs-panel-title">
           Status{' '}
-          <Tag round intent={p.status === 'ready' ? 'success' : p.status === 'failed' ? 'danger' : p.status === 'published' ? 'primary' : 'none'}>
-            {p.status === 'running' ? 'Running' : p.status === 'ready' ? 'Ready' : p.status === 'published' ? 'Published' : p.status === 'failed' ? 'Failed' : 'Discarded'}
+          <Tag round intent={PROPOSAL_STATUS[p.status].intent}>
+            {PROPOSAL_STATUS[p.status].label}
           </Tag>
         </H2>
         <Progress p={p} />

@@ -8,14 +8,13 @@ import { useRequiredUser } from '../../../lib/current-user';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import { useActivateVersion } from '../api/activate-version';
 import { useRulesets, type RulesetVersionInfo } from '../api/get-rulesets';
+import { when } from '../lib/format';
 import { compareVersions, nextVersion } from '../lib/versions';
+import { ProposalList } from './proposal-list';
 import { ProposeForm } from './propose-form';
 import '../rulesets.css';
 
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-const when = (iso: string) => (Number.isNaN(new Date(iso).getTime()) ? iso : dateTime.format(new Date(iso)));
-
-/** Shop and admin: the published versions (one active), proposing new weights; admins roll back. */
+/** Shop and admin: the published versions (one active), the proposals so far, proposing new weights; admins roll back. */
 export function RulesetsPage() {
   const user = useRequiredUser();
   const admin = user.role === 'admin';
@@ -109,6 +108,8 @@ export function RulesetsPage() {
           </HTMLTable>
         </div>
       </Card>
+
+      <ProposalList active={active} />
 
       <Card className="fw-rs-panel" role="region" aria-labelledby="rs-propose">
         <H2 id="rs-propose" className="fw-rs-panel-title">

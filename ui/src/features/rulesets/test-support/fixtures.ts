@@ -1,3 +1,4 @@
+import type { ProposalSummaryDto } from '@fuelwright/shared';
 import type { Proposal, ProposalResult } from '../api/get-proposal';
 
 /** A ready proposal's result with two priors and two rules (invented numbers, no fact of the trade). */
@@ -58,3 +59,18 @@ export function proposal(overrides: Partial<Proposal> = {}): Proposal {
     ...overrides,
   };
 }
+
+/** A proposal as the list gives it (no diff); ready ones carry RESULT's back-test figures. */
+export function proposalSummary(overrides: Partial<ProposalSummaryDto> = {}): ProposalSummaryDto {
+  const { result: _result, ...rest } = proposal();
+  return { ...rest, createdByName: 'Test shop', backTest: null, ...overrides };
+}
+
+const { heldOut, scored, before, after } = RESULT.backTest;
+/** RESULT's back-test as the proposal list carries it. */
+export const LIST_BACK_TEST: ProposalSummaryDto['backTest'] = {
+  heldOut,
+  scored,
+  before: { top1Rate: before.top1Rate, top3Rate: before.top3Rate, brier: before.brier },
+  after: { top1Rate: after.top1Rate, top3Rate: after.top3Rate, brier: after.brier },
+};

@@ -14,9 +14,11 @@
 import { isAbsolute, join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { eq, sql } from 'drizzle-orm';
-import { openDatabase, outcomes } from '@fuelwright/db';
+import { openDatabase, outcomes, rulesets } from '@fuelwright/db';
+import { loadRuleset, validateRuleset, type Ruleset, type RulesetSource } from '@fuelwright/rules';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
+import { InsightRollups } from '../src/learning/insight-rollups.js';
 
 function usage(message: string): never {
   console.error(`${message}\nUsage: npm run seed:outcomes -- --count 50000 --seed 7 [--data-dir ./data] [--replace] [--drift 0.35]`);
@@ -80,6 +82,15 @@ async function main(): Promise<void> {
       `Inserted ${inserted.toLocaleString('en')} demo outcomes in ${((done - opened) / 1000).toFixed(1)} s ` +
         `(${((done - started) / 1000).toFixed(1)} s with opening and migrating); the database now holds ${total.toLocaleString('en')} outcomes.`,
     );
+    // The insight roll-ups of the days just loaded (the app would build them at its next start).
+    const known = new Map<string, Ruleset>();
+    const shipped = loadRuleset();
+    known.set(shipped.version, shipped);
+    for (const row of await handle.db.select().from(rulesets)) {
+      if (!known.has(row.version)) known.set(row.version, validateRuleset(row.source as RulesetSource));
+    }
+    const report = await new InsightRollups(handle.db, (v) => known.get(v)).refresh();
+    console.log(`Built the insight roll-ups: ${report.days.toLocaleString('en')} days and ${report.months} months in ${(report.ms / 1000).toFixed(1)} s.`);
   } finally {
     await handle.close();
   }

@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import type { LogOutcomeRequest, OutcomeDto } from '@fuelwright/shared';
+import type { LogOutcomeRequest, OutcomeDto, RankRequest } from '@fuelwright/shared';
 import { makeUser, meReply, mockApi, renderApp } from '../../../test-utils';
 import { CATALOG, outcome, workOrder } from '../test-support/fixtures';
 
@@ -44,6 +44,9 @@ describe('work order page (shop)', () => {
       'Something else',
     ]);
     expect(within(form).getByRole('button', { name: 'Show all 3 causes' })).toBeInTheDocument();
+    // No setup was entered for this walk-in: the symptoms alone go to the ranking.
+    expect(calls.filter((c) => c.path === '/diagnosis/rank').map((c) => JSON.parse(String(c.init.body)))).toEqual([{ symptoms: [{ id: 'fuel-from-vents' }] }]);
+    expect(screen.getByText('Not given')).toBeInTheDocument();
     await user.click(within(form).getByRole('checkbox', { name: /^Vent lines missing or not routed up/ }));
     await user.type(within(form).getByLabelText('What fixed it'), 'Fitted vent lines');
     // The server's field message shows under the field.
@@ -67,5 +70,37 @@ describe('work order page (shop)', () => {
     // The corrected entry stays, marked; the correction is the current one.
     expect(await screen.findByText('Corrected')).toBeInTheDocument();
     expect(screen.getByText('Fuel level too high')).toBeInTheDocument();
+  });
+
+  it('ranks with the kart’s setup as well as its symptoms, so the causes the setup points to are offered first', async () => {
+    const setup = { carburettorKind: 'pump-around' as const, ventLinesFitted: false };
+    const ranked: RankRequest[] = [];
+    mockApi({
+      'GET /auth/me': meReply(makeUser('shop')),
+      'GET /work-orders': { status: 200, body: { workOrders: [workOrder({ symptoms: [{ id: 'hesitation' }], setup })] } },
+      'GET /catalog': { status: 200, body: CATALOG },
+      'GET /outcomes': { status: 200, body: { outcomes: [], total: 0 } },
+      // A stand-in ranking that, like the real one, lets the setup move causes: vent lines off puts that cause first.
+      'POST /diagnosis/rank': (init) => {
+        const body = JSON.parse(String(init.body)) as RankRequest;
+        ranked.push(body);
+        const causes =
+          body.setup?.ventLinesFitted === false
+            ? [{ id: 'vent-lines-off', probability: 0.5 }, { id: 'foam-degraded', probability: 0.2 }]
+            : [{ id: 'fuel-level-high', probability: 0.3 }, { id: 'foam-degraded', probability: 0.2 }];
+        return { status: 200, body: { causes } };
+      },
+    });
+    renderApp('/work-orders/wo-1');
+    const facts = await screen.findByRole('region', { name: 'The kart' });
+    expect(within(facts).getByRole('list', { name: 'Setup' })).toHaveTextContent('Carburettor: Pump-around');
+    expect(within(facts).getByRole('list', { name: 'Setup' })).toHaveTextContent('Vent lines fitted: No');
+    const form = await screen.findByRole('form', { name: 'Log what really fixed it' });
+    expect(ranked).toEqual([{ symptoms: [{ id: 'hesitation' }], setup }]);
+    expect(within(form).getAllByRole('checkbox').map((b) => b.closest('label')?.querySelector('strong')?.textContent)).toEqual([
+      'Vent lines missing or not routed up',
+      'Bowl foam missing, rotten or soaked',
+      'Something else',
+    ]);
   });
 });

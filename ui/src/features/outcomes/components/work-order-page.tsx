@@ -1,12 +1,13 @@
 import { Button, Callout, Card, H2, NonIdealState, Spinner, Tag } from '@blueprintjs/core';
 import { ClipboardIcon, ErrorIcon } from '@blueprintjs/icons';
 import { generatePath, Link, useParams } from 'react-router-dom';
-import type { OutcomeDto } from '@fuelwright/shared';
+import { SETUP_FIELDS, type OutcomeDto } from '@fuelwright/shared';
 import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
+import { formatSetupValue, SETUP_FIELD_LABELS } from '../../../lib/setup-fields';
 import { useCatalog } from '../api/get-catalog';
 import { useOutcomes } from '../api/get-outcomes';
 import { useWorkOrders } from '../api/get-work-orders';
@@ -24,7 +25,8 @@ export function WorkOrderPage() {
   const catalog = useCatalog();
   const outcomes = useOutcomes();
   const w0 = orders.data?.find((x) => x.id === workOrderId);
-  const ranking = useRankSymptoms(w0?.symptoms ?? [], w0 !== undefined);
+  // The kart's setup counts as much as its symptoms (vent lines off, old foam): rank with both.
+  const ranking = useRankSymptoms({ symptoms: w0?.symptoms ?? [], setup: w0?.setup ?? {} }, w0 !== undefined);
   const notify = useNotify();
   const labels = labelsFrom(catalog.data);
 
@@ -41,6 +43,10 @@ export function WorkOrderPage() {
     );
   }
 
+  const setup = SETUP_FIELDS.flatMap((field) => {
+    const value = formatSetupValue(field, w.setup ?? {});
+    return value === null ? [] : [{ field, value }];
+  });
   const entries = (outcomes.data?.outcomes ?? []).filter((o) => o.workOrderId === w.id);
   const hasCurrent = entries.some((o) => o.current);
   const logged = (o: OutcomeDto) =>
@@ -80,6 +86,20 @@ export function WorkOrderPage() {
                 <li key={s.id}>{labels.symptom(s.id)}</li>
               ))}
             </ul>
+          </dd>
+          <dt>Setup</dt>
+          <dd>
+            {setup.length === 0 ? (
+              <span className="fw-muted">Not given</span>
+            ) : (
+              <ul className="fw-oc-symptom-list" aria-label="Setup">
+                {setup.map(({ field, value }) => (
+                  <li key={field}>
+                    {SETUP_FIELD_LABELS[field]}: {value}
+                  </li>
+                ))}
+              </ul>
+            )}
           </dd>
           {w.caseId && (
             <>

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { proposals, users } from '@fuelwright/db';
-import { PROPOSAL_LIST_LIMIT, type CaseDto, type OutcomeDto, type ProposalDto, type ProposalSummaryDto, type WorkOrderDto } from '@fuelwright/shared';
+import { PROPOSAL_LIST_LIMIT, type CaseDto, type CaseOutcomeDto, type OutcomeDto, type ProposalDto, type ProposalSummaryDto, type WorkOrderDto } from '@fuelwright/shared';
 import { eq } from 'drizzle-orm';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
@@ -41,14 +41,14 @@ describe('reading back outcomes, proposals and work orders', () => {
       ).body;
       const res = await racer.get(`/api/cases/${c.id}/outcomes`);
       expect(res.status).toBe(200);
-      const listed: OutcomeDto[] = res.body.outcomes;
+      const listed: CaseOutcomeDto[] = res.body.outcomes;
       expect(listed.map((o) => o.id)).toEqual([correction.id, first.id]);
       const racerName = await nameOf(racer);
-      expect(listed[0]).toMatchObject({ caseId: c.id, current: true, supersedesId: first.id, confirmedCauses: ['vent-lines-off'], stillFixed: true, loggedByName: racerName });
-      expect(listed[1]).toMatchObject({ current: false, confirmedCauses: ['foam-degraded'], fix: 'New foam blocks', parts: 'foam set', labourMinutes: 25, loggedByName: racerName });
+      expect(listed[0]).toMatchObject({ caseId: c.id, current: true, supersedesId: first.id, confirmedCauses: ['vent-lines-off'], stillFixed: true, loggedByName: racerName, yours: true });
+      expect(listed[1]).toMatchObject({ current: false, confirmedCauses: ['foam-degraded'], fix: 'New foam blocks', parts: 'foam set', labourMinutes: 25, loggedByName: racerName, yours: true });
       // The same entries as the shop/admin outcome log gives, field for field.
       const log: OutcomeDto[] = (await admin.get('/api/outcomes')).body.outcomes;
-      for (const o of listed) expect(o).toEqual(log.find((x) => x.id === o.id));
+      for (const { yours: _yours, ...o } of listed) expect(o).toEqual(log.find((x) => x.id === o.id));
     });
 
     it('answers 404 to anyone the case is not shared with, whatever their role, and to ids that are not cases', async () => {
@@ -64,13 +64,16 @@ describe('reading back outcomes, proposals and work orders', () => {
       expect((await shop.post('/api/invitations/accept').send({ token: linkToken(mail, '/invitations/') })).status).toBeLessThan(300);
       const seen = await shop.get(`/api/cases/${c.id}/outcomes`);
       expect(seen.status).toBe(200);
-      expect(seen.body.outcomes.map((o: OutcomeDto) => [o.id, o.current])).toEqual([
-        [correction.id, true],
-        [first.id, false],
+      // The racer's entries, which are not the shop's own.
+      expect(seen.body.outcomes.map((o: CaseOutcomeDto) => [o.id, o.current, o.yours])).toEqual([
+        [correction.id, true, false],
+        [first.id, false, false],
       ]);
       const byShop = (await shop.post('/api/outcomes').send({ caseId: c.id, confirmedCauses: ['vent-lines-off'], fix: 'Checked the vent lines again', labourMinutes: 10 })).body;
-      const listed: OutcomeDto[] = (await racer.get(`/api/cases/${c.id}/outcomes`)).body.outcomes;
-      expect(listed[0]).toMatchObject({ id: byShop.id, current: true, loggedByName: await nameOf(shop) });
+      const listed: CaseOutcomeDto[] = (await racer.get(`/api/cases/${c.id}/outcomes`)).body.outcomes;
+      expect(listed[0]).toMatchObject({ id: byShop.id, current: true, loggedByName: await nameOf(shop), yours: false });
+      expect(listed.slice(1).every((o) => o.yours)).toBe(true);
+      expect((await shop.get(`/api/cases/${c.id}/outcomes`)).body.outcomes[0]).toMatchObject({ id: byShop.id, yours: true });
       // Still only the case's own entries, and another racer still gets nothing.
       expect(listed.every((o) => o.caseId === c.id)).toBe(true);
       expect((await racer2.get(`/api/cases/${c.id}/outcomes`)).status).toBe(404);

@@ -62,9 +62,15 @@ export interface OutcomeDto {
   at: string;
 }
 
+/** An outcome as its case lists it for one reader. */
+export interface CaseOutcomeDto extends OutcomeDto {
+  /** Logged by the reader: theirs to correct (entries by others are shown, not offered for correction). */
+  yours: boolean;
+}
+
 /** GET /api/cases/:id/outcomes: every entry logged on the case, newest first, corrected ones with `current: false`. */
 export interface CaseOutcomesResponse {
-  outcomes: OutcomeDto[];
+  outcomes: CaseOutcomeDto[];
 }
 
 export interface StartProposalRequest {

@@ -9,8 +9,8 @@ import { toOutcomeDto } from '../outcome-dto.js';
 import { ListCaseOutcomesQuery } from './list-case-outcomes.query.js';
 
 /**
- * Every entry logged on a case, newest first, with who logged it and whether a later entry
- * corrects it. Whoever may view the case reads them (its owner, a coach or shop it is shared
+ * Every entry logged on a case, newest first, with who logged it, whether it is the reader's own,
+ * and whether a later entry corrects it. Whoever may view the case reads them (its owner, a coach or shop it is shared
  * with); anyone else gets 404, as for the case itself.
  */
 @QueryHandler(ListCaseOutcomesQuery)
@@ -34,6 +34,6 @@ export class ListCaseOutcomesHandler implements IQueryHandler<ListCaseOutcomesQu
       .leftJoin(users, eq(users.id, outcomes.loggedBy))
       .where(eq(outcomes.caseId, caseId))
       .orderBy(desc(outcomes.at), desc(outcomes.id));
-    return rows.map((r) => toOutcomeDto(r.o, r.loggedByName ?? '', r.current));
+    return rows.map((r) => ({ ...toOutcomeDto(r.o, r.loggedByName ?? '', r.current), yours: r.o.loggedBy === user.id }));
   }
 }

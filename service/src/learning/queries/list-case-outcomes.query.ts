@@ -1,9 +1,9 @@
 import { Query } from '@nestjs/cqrs';
-import type { OutcomeDto } from '@fuelwright/shared';
+import type { CaseOutcomeDto } from '@fuelwright/shared';
 import type { SessionUser } from '../../common/session-user.js';
 
 /** The outcomes logged on one case, for anyone who may read the case. */
-export class ListCaseOutcomesQuery extends Query<OutcomeDto[]> {
+export class ListCaseOutcomesQuery extends Query<CaseOutcomeDto[]> {
   constructor(
     public readonly user: SessionUser,
     public readonly caseId: string,

@@ -11,7 +11,7 @@ import { OutcomeForm } from './outcome-form';
  * The outcomes logged on one case or work order: each current entry with the entries it corrected
  * underneath, and "Correct this entry", which opens the form filled with the entry.
  */
-export function OutcomeHistory({
+export function OutcomeHistory<T extends OutcomeDto>({
   outcomes,
   labels,
   catalog,
@@ -19,15 +19,17 @@ export function OutcomeHistory({
   canCorrect,
   onLogged,
 }: {
-  outcomes: readonly OutcomeDto[];
+  outcomes: readonly T[];
   labels: Labels;
   catalog?: CatalogResponse;
   target: OutcomeTarget;
-  canCorrect: boolean;
+  /** All entries, none, or those the test picks (on a case: the reader's own). */
+  canCorrect: boolean | ((o: T) => boolean);
   onLogged?: (o: OutcomeDto) => void;
 }) {
   const [correcting, setCorrecting] = useState<string | null>(null);
   const chains = correctionChains(outcomes);
+  const correctable = (o: T) => (typeof canCorrect === 'function' ? canCorrect(o) : canCorrect);
   return (
     <ol className="fw-oc-history">
       {chains.map(({ current, corrected }) => (
@@ -49,7 +51,7 @@ export function OutcomeHistory({
               o={current}
               labels={labels}
               actions={
-                canCorrect && catalog ? (
+                correctable(current) && catalog ? (
                   <Button className="fw-touch" variant="outlined" icon={<EditIcon />} text="Correct this entry" onClick={() => setCorrecting(current.id)} />
                 ) : undefined
               }

@@ -60,11 +60,11 @@ export function draftToRequest(d: OutcomeDraft, target: OutcomeTarget, supersede
  * The entries of one case or work order as a history: each current entry with the entries it
  * corrected (newest first). `outcomes` may come in any order.
  */
-export function correctionChains(outcomes: readonly OutcomeDto[]): { current: OutcomeDto; corrected: OutcomeDto[] }[] {
+export function correctionChains<T extends OutcomeDto>(outcomes: readonly T[]): { current: T; corrected: T[] }[] {
   const byId = new Map(outcomes.map((o) => [o.id, o]));
   const heads = outcomes.filter((o) => o.current).sort((a, b) => b.at.localeCompare(a.at));
   return heads.map((head) => {
-    const corrected: OutcomeDto[] = [];
+    const corrected: T[] = [];
     const seen = new Set([head.id]);
     for (let prev = head.supersedesId ? byId.get(head.supersedesId) : undefined; prev && !seen.has(prev.id); prev = prev.supersedesId ? byId.get(prev.supersedesId) : undefined) {
       seen.add(prev.id);

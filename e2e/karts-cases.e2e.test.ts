@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { mkdirSync } from 'node:fs';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+import { DESKTOP, PHONE, SCREENSHOT_DIR, apiFromPage, launchChromium, newPage, recordOutsideRequests, signInWithForm, snap as snapPage } from './browser.js';
 
-const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
+const RACER = 'racer@fuelwright.test';
 /** Other browser tests use the same demo racer: names made unique per run keep this test's rows apart. */
 /** expect.poll waits 1 s by default; a loaded machine needs longer. */
 const POLL = { timeout: 20_000 };
@@ -14,14 +14,6 @@ function daysAgo(n: number): string {
   const d = new Date(Date.now() - n * 24 * 3600 * 1000);
   const pad = (x: number) => String(x).padStart(2, '0');
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
-}
-
-async function signIn(page: Page, baseUrl: string): Promise<void> {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.fill('#sign-in-email', RACER.email);
-  await page.fill('#sign-in-password', RACER.password);
-  await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${baseUrl}/home`);
 }
 
 /** A full-page screenshot from the top (the sticky navbar is drawn where the page is scrolled to). */
@@ -42,21 +34,6 @@ async function snapPart(locator: Locator, name: string): Promise<void> {
   await locator.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
 }
 
-/** Calls the API from inside the page (same origin, the session cookie goes along). */
-async function apiFromPage<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
-  return page.evaluate(
-    async ({ method, path, body }) => {
-      const res = await fetch(path, {
-        method,
-        headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: await res.json().catch(() => null) };
-    },
-    { method, path, body },
-  );
-}
-
 describe('karts, setups and cases in the browser', () => {
   const baseUrl = inject('baseUrl');
   let browser: Browser;
@@ -73,7 +50,7 @@ describe('karts, setups and cases in the browser', () => {
   it('as the demo racer at 390 px: adds a kart, records a setup after fixing a field, sees the change, finds and opens a case', async () => {
     const { context, page } = await newPage(browser, PHONE, 'dark');
     const outside = recordOutsideRequests(page, baseUrl);
-    await signIn(page, baseUrl);
+    await signInWithForm(page, baseUrl, RACER);
 
     // Home -> My karts -> Add a kart.
     await page.getByRole('button', { name: 'Open karts' }).click();
@@ -200,7 +177,7 @@ describe('karts, setups and cases in the browser', () => {
   it('at desktop width: the kart table, the setups table with changes highlighted, sorting cases, a case page, abandoning and deleting', async () => {
     expect(kartId).not.toBe('');
     const { context, page } = await newPage(browser, DESKTOP, 'light');
-    await signIn(page, baseUrl);
+    await signInWithForm(page, baseUrl, RACER);
 
     await page.goto(`${baseUrl}/karts`);
     const table = page.getByRole('table', { name: 'Your karts' });

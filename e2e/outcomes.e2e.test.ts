@@ -1,87 +1,15 @@
-import { mkdirSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
-import type { CatalogResponse, OutboxMessageDto } from '@fuelwright/shared';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+import type { CatalogResponse } from '@fuelwright/shared';
+import { DESKTOP, PHONE, POLL, apiFromPage, launchChromium, newPage, recordOutsideRequests, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop } from './browser.js';
 
-const PASSWORD = 'fuelwright-demo';
 const RACER = 'racer@fuelwright.test';
 const SHOP = 'shop@fuelwright.test';
 const ADMIN = 'admin@fuelwright.test';
-const POLL = { timeout: 30_000, interval: 250 };
 /** Unique per run, so this test's rows stand apart from other browser tests on the same demo club. */
 const RUN = Date.now().toString(36).slice(-5);
 const CUSTOMER = `Walk-in customer ${RUN}`;
 const STEP = 150_000;
-
-/** A full-page screenshot from the top (the sticky navbar is drawn where the page is scrolled to). */
-async function snap(page: Page, name: string): Promise<void> {
-  await dismissToasts(page);
-  await page.evaluate(() => window.scrollTo(0, 0));
-  await snapPage(page, name);
-}
-
-/** Closes the toasts that would cover a part of the page. */
-async function dismissToasts(page: Page): Promise<void> {
-  const close = page.getByRole('button', { name: 'Close', exact: true });
-  for (let n = await close.count(); n > 0; n = await close.count()) {
-    await close.first().click();
-    await expect.poll(() => close.count(), POLL).toBeLessThan(n);
-  }
-}
-
-/** A screenshot of one part of the page. */
-async function snapPart(locator: Locator, name: string): Promise<void> {
-  mkdirSync(SCREENSHOT_DIR, { recursive: true });
-  await dismissToasts(locator.page());
-  await locator.scrollIntoViewIfNeeded();
-  await locator.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
-}
-
-/** Calls the API from inside the page (same origin, the session cookie goes along). */
-async function apiFromPage<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
-  return page.evaluate(
-    async ({ method, path, body }) => {
-      const res = await fetch(path, {
-        method,
-        headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: await res.json().catch(() => null) };
-    },
-    { method, path, body },
-  );
-}
-
-/** Signs in through the form, as a person does. */
-async function signInWithForm(page: Page, baseUrl: string, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.fill('#sign-in-email', email);
-  await page.fill('#sign-in-password', PASSWORD);
-  await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${baseUrl}/home`);
-}
-
-/** Signs in through the API (for the extra windows that only take screenshots or set things up). */
-async function signInQuietly(page: Page, baseUrl: string, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/conditions`);
-  const res = await apiFromPage(page, 'POST', '/api/auth/sign-in', { email, password: PASSWORD });
-  expect(res.status).toBe(200);
-}
-
-/** Polls the admin outbox (the app sends it to the local capture server every 2 s) until a message matches and is sent. */
-async function waitForMail(admin: Page, match: (m: OutboxMessageDto) => boolean): Promise<OutboxMessageDto> {
-  let found: OutboxMessageDto | undefined;
-  await expect
-    .poll(async () => {
-      const res = await apiFromPage<{ messages: OutboxMessageDto[] }>(admin, 'GET', '/api/admin/outbox');
-      expect(res.status).toBe(200);
-      found = res.body.messages.find((m) => match(m) && m.status === 'sent');
-      return Boolean(found);
-    }, POLL)
-    .toBe(true);
-  return found!;
-}
 
 /**
  * Ticks or unticks a check box through its label, as a finger does (Blueprint draws its own box
@@ -146,14 +74,8 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     });
     expect(opened.status).toBe(201);
     caseId = opened.body.id;
-    const since = new Date(Date.now() - 1000).toISOString();
-    expect((await apiFromPage(racer, 'POST', '/api/shares', { scope: 'case', caseId, email: SHOP, as: 'shop' })).status).toBe(201);
-    const invitation = await waitForMail(admin, (m) => m.kind === 'invitation' && m.toEmail === SHOP && m.createdAt >= since);
-    const token = /\/invitations\/([A-Za-z0-9_-]+)/.exec(invitation.text)?.[1];
-    expect(token, invitation.text).toBeDefined();
-
     await signInWithForm(shop, baseUrl, SHOP);
-    expect((await apiFromPage(shop, 'POST', '/api/invitations/accept', { token })).status).toBe(200);
+    await shareCaseAndAccept({ owner: racer, admin, recipient: shop, caseId, email: SHOP, as: 'shop' });
   });
 
   it('the shop logs what really fixed the shared case, then corrects the entry (390 px)', { timeout: STEP }, async () => {
@@ -173,7 +95,7 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await form.getByLabel('Labour minutes (optional)').fill('20');
     await form.getByRole('radiogroup', { name: 'Still fixed after the next session?' }).getByRole('radio', { name: 'Yes' }).click();
     expect(await form.getByText('Whole minutes from 0 to 6000.').count()).toBe(0);
-    await snap(shop, 'outcomes-case-form-phone');
+    await snapTop(shop, 'outcomes-case-form-phone');
     await form.getByRole('button', { name: 'Log the outcome' }).click();
 
     const entry = panel.getByRole('article').first();
@@ -212,7 +134,7 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     expect(await form.getByLabel('What fixed it').inputValue()).toBe('Return tube clipped');
     await form.getByRole('button', { name: 'Log the outcome' }).click();
     await panel.getByRole('button', { name: 'Correct this entry' }).waitFor();
-    await snap(racer, 'outcomes-racer-case-phone');
+    await snapTop(racer, 'outcomes-racer-case-phone');
   });
 
   it('the shop opens a walk-in work order, logs its outcome, and sees it done (390 px and desktop)', { timeout: STEP }, async () => {
@@ -230,7 +152,7 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await toggle(form.getByRole('checkbox', { name: /^Fuel comes out of the vents/ }), true);
     // The symptom's cautions show as soon as it is ticked.
     await form.getByText('Stop: Fuel near hot parts or the ignition').waitFor();
-    await snap(shop, 'outcomes-new-work-order-phone');
+    await snapTop(shop, 'outcomes-new-work-order-phone');
     await form.getByRole('button', { name: 'Open the work order' }).click();
     await shop.waitForURL(/\/work-orders\/[0-9a-f-]{36}$/);
 
@@ -239,7 +161,7 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await tickCause(outcome, /^Vent lines missing or not routed up/);
     await outcome.getByLabel('What fixed it').fill('Fitted vent lines routed up');
     await outcome.getByLabel('Labour minutes (optional)').fill('10');
-    await snap(shop, 'outcomes-work-order-form-phone');
+    await snapTop(shop, 'outcomes-work-order-form-phone');
     await outcome.getByRole('button', { name: 'Log the outcome' }).click();
     await shop.getByRole('button', { name: 'Correct this entry' }).waitFor();
     await shop.getByText('Done', { exact: true }).first().waitFor();
@@ -248,10 +170,10 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await shopDesk.goto(`${baseUrl}/work-orders`);
     const card = shopDesk.getByRole('list', { name: 'Work orders' }).getByRole('listitem').filter({ hasText: CUSTOMER });
     await card.getByText('1 outcome logged').waitFor();
-    await snap(shopDesk, 'outcomes-work-orders-desktop');
+    await snapTop(shopDesk, 'outcomes-work-orders-desktop');
     await shop.goto(`${baseUrl}/work-orders`);
     await shop.getByRole('list', { name: 'Work orders' }).getByText(CUSTOMER).waitFor();
-    await snap(shop, 'outcomes-work-orders-phone');
+    await snapTop(shop, 'outcomes-work-orders-phone');
   });
 
   it('logs more walk-in outcomes through the API, then the shop sees them in the insights (390 px and desktop)', { timeout: STEP }, async () => {
@@ -293,13 +215,13 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await log.getByText('Return tube pushed home and clipped').waitFor();
     await log.getByText('Corrected', { exact: true }).waitFor();
     expect(await shop.getByRole('button', { name: 'Download CSV' }).getAttribute('href')).toBe('/api/outcomes.csv');
-    await snap(shop, 'outcomes-log-phone');
+    await snapTop(shop, 'outcomes-log-phone');
     await signInQuietly(admin, baseUrl, ADMIN);
     await admin.goto(`${baseUrl}/outcomes`);
     await admin.getByRole('list', { name: 'Outcomes' }).getByText('Return tube pushed home and clipped').waitFor();
     // An admin reads everyone's entries and corrects none.
     expect(await admin.getByRole('button', { name: 'Correct this entry' }).count()).toBe(0);
-    await snap(admin, 'outcomes-log-admin-desktop');
+    await snapTop(admin, 'outcomes-log-admin-desktop');
 
     await shop.goto(`${baseUrl}/insights`);
     const counts = shop.getByRole('region', { name: 'Counts' });
@@ -316,12 +238,12 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     expect(csv).toBe('/api/insights.csv?table=pairs');
     const download = await apiFromPage<null>(shop, 'GET', csv!);
     expect(download.status).toBe(200);
-    await snap(shop, 'outcomes-insights-phone');
+    await snapTop(shop, 'outcomes-insights-phone');
     await snapPart(calibration, 'outcomes-insights-chart-phone');
 
     await shopDesk.goto(`${baseUrl}/insights`);
     await shopDesk.getByRole('region', { name: 'Calibration' }).locator('.recharts-line-dot').first().waitFor();
-    await snap(shopDesk, 'outcomes-insights-desktop');
+    await snapTop(shopDesk, 'outcomes-insights-desktop');
   });
 
   it('the shop proposes new weights and watches the progress bar reach ready; only an admin can publish', { timeout: STEP }, async () => {
@@ -365,10 +287,10 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await rules.getByRole('textbox', { name: 'Find a rule or cause' }).fill('vent lines');
     await expect.poll(async () => (await rules.getByRole('status').textContent()) ?? '', POLL).toMatch(/^\d+ of \d+ shown/);
     await rules.getByRole('textbox', { name: 'Find a rule or cause' }).fill('');
-    await snap(shop, 'outcomes-proposal-phone');
+    await snapTop(shop, 'outcomes-proposal-phone');
     await shopDesk.goto(`${baseUrl}${proposalPath}`);
     await shopDesk.getByRole('table', { name: 'Back-test' }).waitFor();
-    await snap(shopDesk, 'outcomes-proposal-desktop');
+    await snapTop(shopDesk, 'outcomes-proposal-desktop');
     // The poll saw the bar at some value on the way (a proposal over a dozen outcomes may finish between polls).
     expect(seen.size).toBeGreaterThan(0);
   });
@@ -385,11 +307,11 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     const row = versions.getByRole('row').filter({ hasText: `Browser test re-fit ${RUN}` });
     await row.getByText('Active', { exact: true }).waitFor();
     expect((await apiFromPage<{ version: string }>(admin, 'GET', '/api/catalog')).body.version).toBe(proposedVersion);
-    await snap(admin, 'outcomes-rulesets-admin-desktop');
+    await snapTop(admin, 'outcomes-rulesets-admin-desktop');
     await signInQuietly(adminPhone, baseUrl, ADMIN);
     await adminPhone.goto(`${baseUrl}/admin/rulesets`);
     await adminPhone.getByRole('region', { name: 'Published versions' }).getByText(proposedVersion, { exact: true }).waitFor();
-    await snap(adminPhone, 'outcomes-rulesets-admin-phone');
+    await snapTop(adminPhone, 'outcomes-rulesets-admin-phone');
 
     // Roll back to the shipped version (nothing is deleted; other browser tests expect it active).
     await versions.getByRole('button', { name: 'Roll back to 1.0.0' }).click();

@@ -1,99 +1,18 @@
-import { mkdirSync } from 'node:fs';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
-import type { OutboxMessageDto } from '@fuelwright/shared';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { DESKTOP, PHONE, POLL, apiFromPage, invitationPathIn, launchChromium, newPage, recordOutsideRequests, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop, waitForInvitation, waitForMail } from './browser.js';
 
-const PASSWORD = 'fuelwright-demo';
 const RACER = 'racer@fuelwright.test';
 const RACER2 = 'racer2@fuelwright.test';
 const COACH = 'coach@fuelwright.test';
 const ADMIN = 'admin@fuelwright.test';
-const POLL = { timeout: 30_000, interval: 500 };
 /** Unique per run, so this test's rows stand apart from other browser tests on the same demo club. */
 const RUN = Date.now().toString(36).slice(-5);
 const COMMENT = `Is the foam in the bowl crumbling? (${RUN})`;
 const REASON = `The foam is the oldest part on this kart (${RUN})`;
 const PHOTO_WANTED = `The foam blocks, out of the bowl (${RUN})`;
 const STEP = 120_000;
-
-/** A full-page screenshot from the top (the sticky navbar is drawn where the page is scrolled to). */
-async function snap(page: Page, name: string): Promise<void> {
-  await dismissToasts(page);
-  await page.evaluate(() => window.scrollTo(0, 0));
-  await snapPage(page, name);
-}
-
-/** Closes the toasts that would cover a part of the page. */
-async function dismissToasts(page: Page): Promise<void> {
-  const close = page.getByRole('button', { name: 'Close', exact: true });
-  for (let n = await close.count(); n > 0; n = await close.count()) {
-    await close.first().click();
-    await expect.poll(() => close.count(), POLL).toBeLessThan(n);
-  }
-}
-
-/** A screenshot of one part of the page. */
-async function snapPart(locator: Locator, name: string): Promise<void> {
-  mkdirSync(SCREENSHOT_DIR, { recursive: true });
-  await dismissToasts(locator.page());
-  await locator.scrollIntoViewIfNeeded();
-  await locator.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
-}
-
-/** Calls the API from inside the page (same origin, the session cookie goes along). */
-async function apiFromPage<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
-  return page.evaluate(
-    async ({ method, path, body }) => {
-      const res = await fetch(path, {
-        method,
-        headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: await res.json().catch(() => null) };
-    },
-    { method, path, body },
-  );
-}
-
-/** Signs in through the form, as a person does. */
-async function signInWithForm(page: Page, baseUrl: string, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.fill('#sign-in-email', email);
-  await page.fill('#sign-in-password', PASSWORD);
-  await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${baseUrl}/home`);
-}
-
-/** Signs in through the API (for the extra windows that only take screenshots). */
-async function signInQuietly(page: Page, baseUrl: string, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/conditions`);
-  const res = await apiFromPage(page, 'POST', '/api/auth/sign-in', { email, password: PASSWORD });
-  expect(res.status).toBe(200);
-}
-
-/** Polls the admin outbox (the app sends it to the local capture server every 2 s) until a message matches and is sent. */
-async function waitForMail(admin: Page, match: (m: OutboxMessageDto) => boolean): Promise<OutboxMessageDto> {
-  let found: OutboxMessageDto | undefined;
-  await expect
-    .poll(async () => {
-      const res = await apiFromPage<{ capturing: boolean; messages: OutboxMessageDto[] }>(admin, 'GET', '/api/admin/outbox');
-      expect(res.status).toBe(200);
-      expect(res.body.capturing).toBe(true);
-      found = res.body.messages.find((m) => match(m) && m.status === 'sent');
-      return Boolean(found);
-    }, POLL)
-    .toBe(true);
-  return found!;
-}
-
-/** The path of the invitation link in a message (the link's host is the app's public address). */
-function invitationPathIn(message: OutboxMessageDto): string {
-  const path = /\/invitations\/[A-Za-z0-9_-]+/.exec(message.text)?.[0];
-  expect(path, `no invitation link in: ${message.text}`).toBeDefined();
-  return path!;
-}
 
 describe('remote review in the browser: share, accept, comment, recommend, photo, outbox', () => {
   const baseUrl = inject('baseUrl');
@@ -159,14 +78,14 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
   });
 
   it('the coach opens the e-mailed link, accepts, and reviews the case read-only: comment, recommend, ask for a photo', { timeout: STEP }, async () => {
-    const invitation = await waitForMail(admin, (m) => m.kind === 'invitation' && m.toEmail === COACH && m.createdAt >= sharedAt);
+    const invitation = await waitForInvitation(admin, COACH, sharedAt);
     expect(invitation.subject).toBe('Tamsin Vell shared a case with you on Fuelwright');
 
     await signInWithForm(coach, baseUrl, COACH);
     await coach.goto(`${baseUrl}${invitationPathIn(invitation)}`);
     await coach.getByText('Marit Quayle', { exact: false }).first().waitFor();
     await coach.getByRole('button', { name: 'Accept the invitation' }).waitFor();
-    await snap(coach, 'review-invitation-desktop');
+    await snapTop(coach, 'review-invitation-desktop');
     await coach.getByRole('button', { name: 'Accept the invitation' }).click();
     await coach.waitForURL(`${baseUrl}/cases/${caseId}`);
     await coach.getByRole('heading', { name: 'Case on Blue 27' }).waitFor();
@@ -200,13 +119,13 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await photos.getByRole('button', { name: 'Ask for a photo' }).click();
     await photos.getByRole('list', { name: 'Photo requests' }).getByText(PHOTO_WANTED).waitFor();
     expect(await photos.getByText('Waiting for a photo').count()).toBe(1);
-    await snap(coach, 'review-case-coach-desktop');
+    await snapTop(coach, 'review-case-coach-desktop');
 
     await signInQuietly(coachPhone, baseUrl, COACH);
     await coachPhone.goto(`${baseUrl}/cases/${caseId}`);
     await coachPhone.getByRole('region', { name: 'Comments' }).getByText(COMMENT).waitFor();
     await coachPhone.getByText(`Recommended by Marit Quayle: ${REASON}`).waitFor();
-    await snap(coachPhone, 'review-case-coach-phone');
+    await snapTop(coachPhone, 'review-case-coach-phone');
   });
 
   it('the coach’s dashboard groups the shared cases by racer', { timeout: STEP }, async () => {
@@ -217,11 +136,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     const yellow = karts.body.karts.find((k) => k.name === 'Yellow 8')!;
     const opened = await apiFromPage<{ id: string }>(racer2, 'POST', '/api/cases', { kartId: yellow.id, symptoms: ['hesitation'] });
     expect(opened.status).toBe(201);
-    const since = new Date(Date.now() - 1000).toISOString();
-    expect((await apiFromPage(racer2, 'POST', '/api/shares', { scope: 'case', caseId: opened.body.id, email: COACH, as: 'coach' })).status).toBe(201);
-    const invitation = await waitForMail(admin, (m) => m.kind === 'invitation' && m.toEmail === COACH && m.createdAt >= since);
-    const token = invitationPathIn(invitation).split('/').at(-1)!;
-    expect((await apiFromPage(coach, 'POST', '/api/invitations/accept', { token })).status).toBe(200);
+    await shareCaseAndAccept({ owner: racer2, admin, recipient: coach, caseId: opened.body.id, email: COACH, as: 'coach' });
 
     for (const [page, name] of [
       [coach, 'review-dashboard-desktop'],
@@ -234,7 +149,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
       await oskar.locator(`[data-case-id="${opened.body.id}"]`).waitFor();
       expect(await tamsin.locator(`[data-case-id="${caseId}"]`).textContent()).toContain('1 photo awaited');
       expect(await tamsin.locator(`[data-case-id="${caseId}"]`).textContent()).toContain('1 comment');
-      await snap(page, name);
+      await snapTop(page, name);
     }
     await coach.getByRole('region', { name: /Tamsin Vell/ }).locator(`[data-case-id="${caseId}"]`).getByRole('link').click();
     await coach.waitForURL(`${baseUrl}/cases/${caseId}`);
@@ -251,7 +166,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await comments.getByRole('textbox', { name: 'Add a comment' }).fill('Yes, brown and soft. Photo below.');
     await comments.getByRole('button', { name: 'Post comment' }).click();
     await comments.getByText('Yes, brown and soft. Photo below.').waitFor();
-    await snap(racer, 'review-racer-case-phone');
+    await snapTop(racer, 'review-racer-case-phone');
     await snapPart(comments, 'review-racer-comments-phone');
 
     // A file that only claims to be a picture: the server checks the content and says why.
@@ -284,7 +199,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await racerDesk.getByRole('region', { name: 'Comments' }).getByText('Yes, brown and soft. Photo below.').waitFor();
     const deskGallery = racerDesk.getByRole('region', { name: 'Photos', exact: true });
     await deskGallery.getByRole('img', { name: 'Foam blocks out of the bowl' }).waitFor();
-    await snap(racerDesk, 'review-racer-case-desktop');
+    await snapTop(racerDesk, 'review-racer-case-desktop');
     await snapPart(racerDesk.getByRole('region', { name: 'Comments' }), 'review-racer-comments-desktop');
     await snapPart(deskGallery, 'review-photos-desktop');
 
@@ -292,7 +207,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await racer.goto(`${baseUrl}/account/e-mails`);
     await racer.getByRole('checkbox', { name: 'New comments on a case' }).waitFor();
     expect(await racer.getByRole('checkbox').count()).toBe(5);
-    await snap(racer, 'review-email-settings-phone');
+    await snapTop(racer, 'review-email-settings-phone');
 
     // The coach sees the answer.
     await coach.reload();
@@ -319,7 +234,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await invitation.frameLocator('iframe').getByText('See what was shared').waitFor();
     expect(await frame.getAttribute('sandbox')).toBe('');
     expect(await frame.getAttribute('srcdoc')).toContain('/invitations/');
-    await snap(admin, 'review-outbox-desktop');
+    await snapTop(admin, 'review-outbox-desktop');
     // Chromium leaves the sandboxed frame out of full-page captures: the message card on its own shows it.
     await snapPart(invitation, 'review-outbox-message-desktop');
 
@@ -331,7 +246,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     const notice = phoneList.locator('[data-kind="check-recommended"]').first();
     await notice.getByRole('button', { name: 'Show the message' }).click();
     await notice.locator('pre').waitFor();
-    await snap(adminPhone, 'review-outbox-phone');
+    await snapTop(adminPhone, 'review-outbox-phone');
 
     expect(outside.flat()).toEqual([]);
   });

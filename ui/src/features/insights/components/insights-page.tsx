@@ -6,6 +6,7 @@ import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
+import { PeriodFilter } from '../../../components/period-filter';
 import { useCatalog } from '../api/get-catalog';
 import { useInsights, type InsightsResponse } from '../api/get-insights';
 import { useRulesetVersions } from '../api/get-ruleset-versions';
@@ -23,7 +24,6 @@ import {
   type Labels,
 } from '../lib/format';
 import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../../../lib/period';
-import { PeriodFilter } from './period-filter';
 import { ReliabilityChart } from './reliability-chart';
 import '../insights.css';
 

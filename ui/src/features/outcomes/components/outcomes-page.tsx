@@ -6,6 +6,7 @@ import type { OutcomeDto } from '@fuelwright/shared';
 import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
+import { PeriodFilter } from '../../../components/period-filter';
 import { useNotify } from '../../../components/toaster';
 import { API_BASE } from '../../../lib/api-client';
 import { useRequiredUser } from '../../../lib/current-user';
@@ -16,7 +17,6 @@ import { labelsFrom, type Labels } from '../lib/labels';
 import { periodFromSearch, periodQueryString, type PeriodFilter as Filter } from '../../../lib/period';
 import { OutcomeEntry } from './outcome-entry';
 import { OutcomeForm } from './outcome-form';
-import { PeriodFilter } from './period-filter';
 import '../outcomes.css';
 
 const PAGE = 50;

@@ -1,10 +1,11 @@
 import { Button, FormGroup, HTMLSelect } from '@blueprintjs/core';
-import { TextField } from '../../../components/text-field';
-import type { PeriodFilter as Filter } from '../../../lib/period';
+import type { PeriodFilter as Filter } from '../lib/period';
+import { TextField } from './text-field';
+import './period-filter.css';
 
 /**
- * From, to and ruleset version. Each change applies at once (the page keeps the filter in its
- * address, so it survives a reload and can be shared).
+ * From, to and ruleset version (used by the insights and the outcomes log). Each change applies
+ * at once (the page keeps the filter in its address, so it survives a reload and can be shared).
  */
 export function PeriodFilter({
   value,
@@ -22,7 +23,7 @@ export function PeriodFilter({
   const set = (key: keyof Filter, v: string) => onChange({ ...value, [key]: v || undefined });
   const invalid = value.from && value.to && value.from > value.to ? ['The first day comes after the last.'] : [];
   return (
-    <div className="fw-oc-filters" role="group" aria-label="Period and version">
+    <div className="fw-period-filter" role="group" aria-label="Period and version">
       <TextField id={`${idPrefix}-from`} label="From" type="date" value={value.from ?? ''} onChange={(v) => set('from', v)} />
       <TextField id={`${idPrefix}-to`} label="To (included)" type="date" value={value.to ?? ''} onChange={(v) => set('to', v)} errors={invalid} />
       <FormGroup label="Ruleset version" labelFor={`${idPrefix}-version`}>
@@ -37,7 +38,7 @@ export function PeriodFilter({
         </HTMLSelect>
       </FormGroup>
       {(value.from || value.to || value.version) && (
-        <div className="fw-oc-filter-actions">
+        <div className="fw-period-filter-actions">
           <Button className="fw-touch" size="large" variant="minimal" text="Clear" onClick={() => onChange({})} />
         </div>
       )}

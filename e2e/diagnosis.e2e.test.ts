@@ -7,9 +7,9 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import type { CatalogResponse, CaseDto } from '@fuelwright/shared';
-import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap as snapPage } from './browser.js';
+import { DESKTOP, PHONE, apiFromPage, launchChromium, newPage, recordOutsideRequests, signInWithForm, snap as snapPage } from './browser.js';
 
-const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
+const RACER = 'racer@fuelwright.test';
 /** expect.poll and waits: a loaded machine needs longer than the defaults. */
 const WAIT = { timeout: 20_000 };
 const RUN = Date.now().toString(36).slice(-5);
@@ -23,20 +23,6 @@ async function snap(page: Page, name: string): Promise<void> {
 /** Waits until the element shows (vitest's expect has no browser matchers). */
 async function visible(locator: Locator): Promise<void> {
   await locator.first().waitFor({ state: 'visible', ...WAIT });
-}
-
-async function api<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
-  return page.evaluate(
-    async ({ method, path, body }) => {
-      const res = await fetch(path, {
-        method,
-        headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: await res.json().catch(() => null) };
-    },
-    { method, path, body },
-  );
 }
 
 /** The screen the walk-through shows, and the machine's state (data attributes on its root). */
@@ -64,20 +50,40 @@ async function pickSymptom(page: Page, id: string): Promise<void> {
   await page.locator(`[data-symptom="${id}"] label`).first().click();
 }
 
-/** The check on screen, its cautions acknowledged when it shows them first; answers whether it did. */
-async function openCheck(page: Page): Promise<{ checkId: string; hadCautions: boolean }> {
+/**
+ * Whether a check's cautions are read before its steps: it has cautions of its own, or it opens a
+ * group (anything but "outside") that has some (the rule the walk-through applies, in
+ * ui/src/features/diagnosis/components/caution-check-ids.ts).
+ */
+function cautionsFirst(catalog: CatalogResponse, checkId: string): boolean {
+  const check = catalog.checks.find((c) => c.id === checkId);
+  expect(check, `check ${checkId} in the catalog`).toBeDefined();
+  const group = catalog.groups.find((g) => g.id === check!.group);
+  return check!.cautions.length > 0 || (check!.group !== 'outside' && (group?.cautions.length ?? 0) > 0);
+}
+
+/**
+ * The check on screen (one not opened before), its cautions acknowledged when it shows them first;
+ * answers whether it did. Decides only once the check has settled on its cautions or its steps (a
+ * screen in passing, e.g. while the case is read again from the server, says neither), and checks
+ * that the cautions showed exactly when the catalog gives the check some.
+ */
+async function openCheck(page: Page, catalog: CatalogResponse): Promise<{ checkId: string; hadCautions: boolean }> {
   await waitForScreen(page, 'check');
+  const cautions = page.getByRole('heading', { name: /Before you start/ });
+  const steps = page.getByRole('heading', { name: 'Steps', exact: true });
+  await visible(cautions.or(steps));
   const checkId = (await page.locator('.fw-diag-step[data-check]').getAttribute('data-check'))!;
-  const { state } = await screenOf(page);
-  const hadCautions = JSON.stringify(state) === JSON.stringify({ check: 'cautions' });
+  const hadCautions = (await cautions.count()) > 0;
+  expect(hadCautions, `cautions first for ${checkId}`).toBe(cautionsFirst(catalog, checkId));
+  expect((await screenOf(page)).state).toEqual({ check: hadCautions ? 'cautions' : 'steps' });
   if (hadCautions) {
     // Cautions first: neither the steps nor the result buttons are there yet.
-    await visible(page.getByRole('heading', { name: /Before you start/ }));
-    expect(await page.getByRole('heading', { name: 'Steps', exact: true }).count()).toBe(0);
+    expect(await steps.count()).toBe(0);
     expect(await page.getByRole('radio', { name: 'Looks fine' }).count()).toBe(0);
     await page.getByRole('button', { name: /I have read the cautions/ }).click();
   }
-  await visible(page.getByRole('heading', { name: 'Steps', exact: true }));
+  await visible(steps);
   return { checkId, hadCautions };
 }
 
@@ -113,7 +119,7 @@ async function quickDiagnosis(page: Page, baseUrl: string, tag: string, catalog:
     await page.getByRole('button', { name: /^(Start with|Next check):/ }).click();
     await waitForScreen(page, 'check');
     if (i === 0) await snap(page, `${tag}-03-check-cautions`);
-    const { checkId, hadCautions } = await openCheck(page);
+    const { checkId, hadCautions } = await openCheck(page, catalog);
     sawCautions ||= hadCautions;
     if (i === 0) await snap(page, `${tag}-04-check-steps`);
     await record(page, 'Looks fine', i === 0 ? 'all as it should be' : undefined);
@@ -160,7 +166,7 @@ describe('the guided walk-through in the browser', () => {
 
       // Leave in the middle of a check (cautions acknowledged) and come back: the same place.
       await page.getByRole('button', { name: /^Next check:/ }).click();
-      const { checkId: leftOn } = await openCheck(page);
+      const { checkId: leftOn } = await openCheck(page, catalog);
       await page.getByRole('radio', { name: 'Could not check' }).click();
       await page.goto(`${baseUrl}/conditions`);
       await page.goto(`${baseUrl}/diagnose`);
@@ -208,7 +214,7 @@ describe('the guided walk-through in the browser', () => {
       // The symptom's own caution leads the ranking.
       await expect.poll(() => page.getByLabel('Cautions for these symptoms').innerText(), WAIT).toContain('Stop:');
       await page.getByRole('button', { name: /^Start with:/ }).click();
-      const { checkId } = await openCheck(page);
+      const { checkId } = await openCheck(page, catalog);
       expect(catalog.checks.find((c) => c.id === checkId)?.stopOnFault).toBe(true);
       await record(page, 'Fault found');
       await waitForScreen(page, 'stopped');
@@ -244,7 +250,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByText('Float-valve slide carburettor', { exact: true }).click();
       await page.getByRole('button', { name: 'Show the likely causes' }).click();
       await page.getByRole('button', { name: /^Start with:/ }).click();
-      await openCheck(page);
+      await openCheck(page, catalog);
       await record(page, 'Fault found');
       await waitForScreen(page, 'stopped');
       await snap(page, 'diagnosis-desktop-08-stop');
@@ -263,7 +269,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByLabel('Main jet').fill('185');
       await page.getByRole('button', { name: 'Show the likely causes' }).click();
       await page.getByRole('button', { name: /^Start with:/ }).click();
-      const { checkId } = await openCheck(page);
+      const { checkId } = await openCheck(page, catalog);
       await record(page, 'Looks fine', 'snaps back every time');
       await waitForScreen(page, 'ranking');
       await page.getByRole('button', { name: 'Finish without a fix' }).click();
@@ -285,7 +291,7 @@ describe('the guided walk-through in the browser', () => {
       await waitForScreen(page, 'ranking');
 
       const caseId = page.url().split('/cases/')[1].split('/')[0];
-      const saved = await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`);
+      const saved = await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`);
       expect(saved.status).toBe(200);
       expect(saved.body.kartName).toBe(`Red ${RUN}`);
       expect(saved.body.symptoms.map((s) => s.id)).toEqual(['bog-on-acceleration']);
@@ -301,11 +307,7 @@ describe('the guided walk-through in the browser', () => {
   it('the demo racer opens a case on "Blue 27", records a result, resolves it and finds it in the case list', async () => {
     const { context, page } = await newPage(browser, PHONE, 'light');
     try {
-      await page.goto(`${baseUrl}/sign-in`);
-      await page.fill('#sign-in-email', RACER.email);
-      await page.fill('#sign-in-password', RACER.password);
-      await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
-      await page.waitForURL(`${baseUrl}/home`, WAIT);
+      await signInWithForm(page, baseUrl, RACER);
 
       await page.goto(`${baseUrl}/cases`);
       await page.getByText('Open a new case').click();
@@ -326,14 +328,14 @@ describe('the guided walk-through in the browser', () => {
       const caseId = page.url().split('/cases/')[1].split('/')[0];
 
       await page.getByRole('button', { name: /^Start with:/ }).click();
-      const { checkId } = await openCheck(page);
+      const { checkId } = await openCheck(page, catalog);
       // Reload mid-check: the place is restored and checked against the server's case.
       await page.reload();
       await waitForScreen(page, 'check');
       expect((await screenOf(page)).state).toEqual({ check: 'steps' });
       await record(page, 'Looks fine', 'checked twice');
       await waitForScreen(page, 'ranking');
-      let dto = (await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
+      let dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.results.map((r) => [r.checkId, r.result, r.note])).toEqual([[checkId, 'looks-fine', 'checked twice']]);
 
       await page.getByRole('button', { name: /say what fixed it/i }).click();
@@ -344,7 +346,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByRole('button', { name: 'Save: fixed' }).click();
       await waitForScreen(page, 'summary');
       await snap(page, 'diagnosis-case-phone-02-summary');
-      dto = (await api<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
+      dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.state).toBe('resolved');
       expect(dto.resolution).toMatchObject({ causeId: topCause.id, fix: 'Cleaned and refitted it' });
 
@@ -361,7 +363,7 @@ describe('the guided walk-through in the browser', () => {
       // A finished case's walk-through opens on its summary; the server refuses further steps (409).
       await page.goto(`${baseUrl}/cases/${caseId}/walk-through`);
       await waitForScreen(page, 'summary');
-      const refused = await api(page, 'POST', `/api/cases/${caseId}/results`, { checkId, result: 'fault-found' });
+      const refused = await apiFromPage(page, 'POST', `/api/cases/${caseId}/results`, { checkId, result: 'fault-found' });
       expect(refused.status).toBe(409);
     } finally {
       await context.close();

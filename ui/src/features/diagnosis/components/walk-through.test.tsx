@@ -1,14 +1,16 @@
 /**
  * The quick diagnosis page wired to a fake API: cautions before steps, what is sent to the
  * ranking, the bars with their numbers, a 400 shown under its field, and the place kept in this
- * browser. The catalog and ranking below are neutral plumbing fixtures, not facts of the trade.
+ * browser; then a saved case's pages: the hand-over from "Diagnose a kart" to the case's own
+ * walk-through, and a place restored in this browser checked against the server before it shows.
+ * The catalog and ranking below are neutral plumbing fixtures, not facts of the trade.
  */
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import type { CatalogResponse, CheckResultValue, RankRequest, RankResponse } from '@fuelwright/shared';
-import { meReply, mockApi, renderApp, type ApiReply } from '../../../test-utils';
-import { QUICK_DIAGNOSIS_KEY } from '../hooks/walk-through-storage';
+import type { CaseDto, CatalogResponse, CheckResultValue, KartDto, RankRequest, RankResponse } from '@fuelwright/shared';
+import { makeUser, meReply, mockApi, renderApp, type ApiReply } from '../../../test-utils';
+import { QUICK_DIAGNOSIS_KEY, caseStorageKey } from '../hooks/walk-through-storage';
 
 const CAUTION = { id: 'k1', severity: 'caution' as const, title: 'Hot parts', text: 'Let them cool first.' };
 
@@ -146,5 +148,133 @@ describe('quick diagnosis page', () => {
     const premix = await screen.findByLabelText('Premix ratio (fuel to oil)');
     await waitFor(() => expect(premix).toHaveAccessibleDescription('must be at most 100'));
     expect(screen.getByRole('checkbox', { name: /Symptom one/ })).toBeChecked();
+  });
+});
+
+const AT = '2026-11-20T10:00:00.000Z';
+const RACER = makeUser('racer');
+const KART: KartDto = {
+  id: 'k1',
+  ownerId: RACER.id,
+  ownerName: RACER.displayName,
+  name: 'Blue 27',
+  displacementCc: 125,
+  drive: 'direct-drive',
+  carburettorKind: 'pump-around',
+  notes: '',
+  createdAt: AT,
+  updatedAt: AT,
+};
+const CASE: CaseDto = {
+  id: 'c1',
+  kartId: KART.id,
+  kartName: KART.name,
+  ownerId: RACER.id,
+  ownerName: RACER.displayName,
+  state: 'open',
+  rulesetVersion: 'test',
+  symptomIds: ['sym-1'],
+  topCauseId: 'cause-x',
+  topCauseProbability: 0.6,
+  openedAt: AT,
+  updatedAt: AT,
+  symptoms: [{ id: 'sym-1' }],
+  setup: { carburettorKind: 'pump-around' },
+  conditions: {},
+  results: [],
+  rank: rankReply(),
+  openingRank: rankReply(),
+  resolution: null,
+  stop: null,
+  abandonedReason: null,
+  recommendations: [],
+  events: [],
+};
+
+/**
+ * Every screen each walk-through root shows, in order, roots numbered as they appear. Read from
+ * the mutation records (with old values), so a screen drawn and replaced within one task counts.
+ */
+function watchScreens() {
+  const roots = new Map<Element, string[]>();
+  const screensOf = (el: Element) => {
+    if (!roots.has(el)) roots.set(el, []);
+    return roots.get(el)!;
+  };
+  const note = (el: Element, screen: string | null) => {
+    const screens = screensOf(el);
+    if (screen !== null && screens.at(-1) !== screen) screens.push(screen);
+  };
+  const read = (records: MutationRecord[]) => {
+    for (const record of records) {
+      if (record.type === 'attributes' && (record.target as Element).classList.contains('fw-diag')) {
+        note(record.target as Element, record.oldValue);
+        note(record.target as Element, (record.target as Element).getAttribute('data-screen'));
+      }
+      for (const node of record.addedNodes) {
+        if (!(node instanceof Element)) continue;
+        const added = node.classList.contains('fw-diag') ? [node] : [...node.querySelectorAll('.fw-diag')];
+        // Its screen when added is its first attribute change's old value, when there is one.
+        for (const el of added) screensOf(el);
+      }
+    }
+  };
+  const observer = new MutationObserver(read);
+  observer.observe(document.body, { subtree: true, childList: true, attributes: true, attributeOldValue: true, attributeFilter: ['data-screen'] });
+  return {
+    screens: () => {
+      read(observer.takeRecords());
+      return [...roots].map(([el, screens]) => (screens.length > 0 ? screens : [el.getAttribute('data-screen') ?? '']));
+    },
+    stop: () => observer.disconnect(),
+  };
+}
+
+describe('a case’s walk-through', () => {
+  it('hands over from "Diagnose a kart" once the case is open, and shows a restored place only as the server has it', async () => {
+    const caseReads: string[] = [];
+    mockApi({
+      'GET /auth/me': meReply(RACER),
+      'GET /catalog': { status: 200, body: CATALOG },
+      'GET /karts': { status: 200, body: { karts: [KART] } },
+      'GET /karts/k1/setups': { status: 200, body: { setups: [] } },
+      'POST /cases': { status: 201, body: CASE },
+      'GET /cases/c1': () => {
+        caseReads.push('c1');
+        return { status: 200, body: CASE };
+      },
+    });
+    const user = userEvent.setup();
+    const watch = watchScreens();
+    const { router, unmount } = renderApp('/diagnose/new?kartId=k1');
+    await user.click(await screen.findByRole('checkbox', { name: /Symptom one/ }));
+    await user.click(screen.getByRole('button', { name: 'Open the case and rank the causes' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/cases/c1/walk-through'));
+    await screen.findByRole('button', { name: 'Start with: Check A' });
+    // The intake's own walk-through never showed its ranking: nothing could be done in it after the
+    // case was open. The case's walk-through showed its place once the server's case was in.
+    expect(watch.screens()).toEqual([
+      ['intake', 'loading'],
+      ['loading', 'ranking'],
+    ]);
+    expect(caseReads).toHaveLength(1);
+
+    await user.click(screen.getByRole('button', { name: 'Start with: Check A' }));
+    expect(await screen.findByText('Caution: Hot parts')).toBeInTheDocument();
+    const stored = JSON.parse(localStorage.getItem(caseStorageKey('c1'))!) as { snapshot: { value: unknown } };
+    expect(stored.snapshot.value).toEqual({ check: 'cautions' });
+    unmount();
+    watch.stop();
+
+    // Coming back: the stored place shows only after the server's case has been read again.
+    const again = watchScreens();
+    renderApp('/cases/c1/walk-through');
+    expect(await screen.findByText('Caution: Hot parts')).toBeInTheDocument();
+    expect(again.screens()).toEqual([['loading', 'check']]);
+    expect(caseReads).toHaveLength(2);
+    expect(screen.queryByText('Step one of A.')).toBeNull();
+    await user.click(screen.getByRole('button', { name: /I have read the cautions/ }));
+    expect(screen.getByText('Step one of A.')).toBeInTheDocument();
+    again.stop();
   });
 });

@@ -73,10 +73,15 @@ export function WalkThrough({
   /** Case mode, new case: called once the server has opened it. */
   onCaseOpened?: (caseId: string) => void;
 }) {
-  const { snapshot, send } = useWalkThrough(options);
+  const { snapshot, send, settling } = useWalkThrough(options);
   const lookup = useMemo(() => catalogLookup(catalog), [catalog]);
   const ctx = snapshot.context;
-  const screen = screenOf(snapshot);
+  const openedCaseId = options.caseId ? null : ctx.caseId;
+  // A new case is open: the case's own walk-through page takes over (from the snapshot stored under
+  // the case's key). Until it shows, this machine's screens stay hidden, so that nothing is done in
+  // a walk-through about to be dropped (the address changes before the next page is drawn).
+  const handingOver = openedCaseId !== null && onCaseOpened !== undefined;
+  const screen = settling || handingOver ? 'loading' : screenOf(snapshot);
   const top = useRef<HTMLDivElement>(null);
   const place = `${screen}:${ctx.currentCheckId ?? ''}`;
   const firstPlace = useRef(place);
@@ -88,7 +93,6 @@ export function WalkThrough({
     top.current?.focus({ preventScroll: true });
   }, [place]);
 
-  const openedCaseId = options.caseId ? null : ctx.caseId;
   useEffect(() => {
     if (openedCaseId && onCaseOpened) onCaseOpened(openedCaseId);
   }, [openedCaseId, onCaseOpened]);
@@ -96,7 +100,7 @@ export function WalkThrough({
   let body: React.JSX.Element;
   switch (screen) {
     case 'loading':
-      body = <PageSpinner label="Loading the case" />;
+      body = <PageSpinner label={handingOver ? 'Opening the case' : 'Loading the case'} />;
       break;
     case 'failed':
       body = (

@@ -97,13 +97,18 @@ export function useWalkThrough(options: UseWalkThroughOptions) {
   const actorRef = useActorRef(machine, start.snapshot ? { input: start.input, snapshot: start.snapshot } : { input: start.input });
   const snapshot = useSelector(actorRef, (s) => s);
 
-  // A saved case restored from this browser: the server's case is the truth.
+  // A saved case restored from this browser: the server's case is the truth. Until the machine has
+  // been told to reconcile, the restored place is not shown: a tap on it would be lost when the
+  // machine goes to load the case (its screens unmount while it does).
+  const mustReconcile = Boolean(start.snapshot) && options.mode === 'case' && Boolean(options.caseId);
+  const [settling, setSettling] = useState(mustReconcile);
   const reconciled = useRef(false);
   useEffect(() => {
-    if (reconciled.current || !start.snapshot || options.mode !== 'case' || !options.caseId) return;
+    if (reconciled.current || !mustReconcile) return;
     reconciled.current = true;
     actorRef.send({ type: 'RECONCILE' });
-  }, [actorRef, start.snapshot, options.mode, options.caseId]);
+    setSettling(false);
+  }, [actorRef, mustReconcile]);
 
   const storageKey = options.storageKey;
   useEffect(() => {
@@ -117,7 +122,8 @@ export function useWalkThrough(options: UseWalkThroughOptions) {
     return () => subscription.unsubscribe();
   }, [actorRef, storageKey]);
 
-  return { snapshot, send: actorRef.send, actorRef };
+  /** `settling`: a restored case not yet handed to the server to reconcile (show it as loading). */
+  return { snapshot, send: actorRef.send, actorRef, settling };
 }
 
 export type WalkThroughSnapshot = ReturnType<typeof useWalkThrough>['snapshot'];

@@ -12,6 +12,7 @@ import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { useJetKit } from '../api/get-jet-kit';
 import { useKarts } from '../api/get-karts';
 import { useSessions } from '../api/get-sessions';
+import { useSetups } from '../api/get-setups';
 import { JetKitForm } from './jet-kit-form';
 import { JettingChart } from './jetting-chart';
 import { LogSessionForm } from './log-session-form';
@@ -27,6 +28,7 @@ export function KartJettingPage() {
   const navigate = useNavigate();
   const karts = useKarts();
   const sessions = useSessions(kartId);
+  const setups = useSetups(kartId);
   const jetKit = useJetKit(kartId);
   const { units, setUnits } = useUnitPreferences();
   const [todayAir, setTodayAir] = useState<AirFormValues>(EMPTY_AIR_FORM);
@@ -129,16 +131,22 @@ export function KartJettingPage() {
       >
         {logging && (
           <SectionCard>
-            <LogSessionForm
-              kartId={kartId}
-              units={units}
-              latest={list[0]}
-              initialAir={todayAir}
-              onDone={() => {
-                setLogging(false);
-                setResult(undefined);
-              }}
-            />
+            {setups.isPending ? (
+              <Spinner aria-label="Loading the setups" />
+            ) : (
+              <LogSessionForm
+                kartId={kartId}
+                units={units}
+                latest={list[0]}
+                setups={setups.data ?? []}
+                setupsError={setups.isError ? `The setups could not be loaded (${setups.error.message}): the session can be logged without one.` : undefined}
+                initialAir={todayAir}
+                onDone={() => {
+                  setLogging(false);
+                  setResult(undefined);
+                }}
+              />
+            )}
           </SectionCard>
         )}
         <SectionCard padded={list.length === 0}>
@@ -150,7 +158,7 @@ export function KartJettingPage() {
               baselines of the suggestion.
             </p>
           ) : (
-            <SessionLogTable kartId={kartId} sessions={list} units={units} canDelete={canEdit} />
+            <SessionLogTable kartId={kartId} sessions={list} setups={setups.data ?? []} units={units} canDelete={canEdit} />
           )}
         </SectionCard>
       </Section>

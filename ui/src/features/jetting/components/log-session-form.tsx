@@ -10,6 +10,7 @@ import {
   type JettingSessionInput,
   type PlugColour,
   type Ran,
+  type SetupDto,
   type UnitPreferences,
 } from '@fuelwright/shared';
 import {
@@ -24,11 +25,13 @@ import { TextField } from '../../../components/text-field';
 import { useNotify } from '../../../components/toaster';
 import { formErrors } from '../../../lib/form-errors';
 import { useLogSession } from '../api/log-session';
+import { JET_FIELDS, jetTextsFrom, setupLabel, type JetTexts } from '../lib/setup-summary';
 
 const FIELDS = [
   ...AIR_API_FIELDS,
   'sessionOn',
   'track',
+  'setupId',
   'mainJet',
   'pilotJet',
   'needleClipGroove',
@@ -60,28 +63,23 @@ const RAN_OPTIONS: { value: Ran; label: string }[] = [
   { value: 'lean', label: 'Lean' },
 ];
 
-interface Fields {
+interface Fields extends JetTexts {
   sessionOn: string;
   track: string;
-  mainJet: string;
-  pilotJet: string;
-  needleClipGroove: string;
-  airScrewTurnsOut: string;
+  /** '' = no setup linked. */
+  setupId: string;
   plugColour: PlugColour | '';
   ran: Ran | '';
   lapTime: string;
   note: string;
 }
 
-function initialFields(latest: JettingSessionDto | undefined): Fields {
-  const s = (n: number | null | undefined) => (n === null || n === undefined ? '' : String(n));
+function initialFields(latest: JettingSessionDto | undefined, setup: SetupDto | undefined): Fields {
   return {
     sessionOn: localToday(),
     track: latest?.track ?? '',
-    mainJet: s(latest?.mainJet),
-    pilotJet: s(latest?.pilotJet),
-    needleClipGroove: s(latest?.needleClipGroove),
-    airScrewTurnsOut: s(latest?.airScrewTurnsOut),
+    setupId: setup?.id ?? '',
+    ...jetTextsFrom(setup, latest),
     plugColour: '',
     ran: '',
     lapTime: '',
@@ -89,29 +87,52 @@ function initialFields(latest: JettingSessionDto | undefined): Fields {
   };
 }
 
-/** One session of the jetting log: the day's air, the jets, how it ran. */
+/**
+ * One session of the jetting log: the day's air, the setup it ran, the jets, how it ran. The setup
+ * defaults to the kart's latest; picking one fills the jets the racer has not typed from it.
+ */
 export function LogSessionForm({
   kartId,
   units,
   latest,
+  setups,
+  setupsError,
   initialAir,
   onDone,
 }: {
   kartId: string;
   units: UnitPreferences;
   latest: JettingSessionDto | undefined;
+  /** The kart's setup snapshots, newest first. */
+  setups: readonly SetupDto[];
+  /** Why the setups could not be loaded (the session can still be logged without one). */
+  setupsError?: string;
   initialAir: AirFormValues;
   onDone: () => void;
 }) {
   const [air, setAir] = useState<AirFormValues>(initialAir);
   useConvertOnUnitChange(units, setAir);
-  const [f, setF] = useState<Fields>(() => initialFields(latest));
+  const [f, setF] = useState<Fields>(() => initialFields(latest, setups[0]));
+  /** Jet fields the racer typed into: a setup picked later does not overwrite them. */
+  const [typed, setTyped] = useState<ReadonlySet<keyof JetTexts>>(() => new Set());
   const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
   const log = useLogSession(kartId);
   const notify = useNotify();
   const server = formErrors(log.error, FIELDS);
   const errors = (name: string) => clientErrors[name] ?? server.field(name);
   const set = (patch: Partial<Fields>) => setF((cur) => ({ ...cur, ...patch }));
+  const setJet = (field: keyof JetTexts, value: string) => {
+    setTyped((cur) => new Set(cur).add(field));
+    set({ [field]: value });
+  };
+  const pickSetup = (setupId: string) => {
+    const setup = setups.find((s) => s.id === setupId);
+    const filled = jetTextsFrom(setup, latest);
+    const patch: Partial<Fields> = { setupId };
+    // "None" keeps the jets as they are; a setup fills every jet field not typed into.
+    if (setup) for (const field of JET_FIELDS) if (!typed.has(field)) patch[field] = filled[field];
+    set(patch);
+  };
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -141,6 +162,7 @@ export function LogSessionForm({
       ...parsed.reading,
       sessionOn: f.sessionOn,
       ...(f.track.trim() ? { track: f.track.trim() } : {}),
+      ...(f.setupId ? { setupId: f.setupId } : {}),
       mainJet,
       ...(pilotJet !== undefined ? { pilotJet } : {}),
       ...(needleClipGroove !== undefined ? { needleClipGroove } : {}),
@@ -172,15 +194,46 @@ export function LogSessionForm({
         />
       </div>
       <AirReadingFields idPrefix="log" values={air} onChange={setAir} units={units} errors={errors} />
+      <FormGroup
+        label="Setup used"
+        labelFor="log-setup"
+        intent={errors('setupId').length ? 'danger' : 'none'}
+        helperText={
+          <span id="log-setup-help">
+            {errors('setupId').join(' ') ||
+              setupsError ||
+              (setups.length === 0
+                ? 'No setup recorded for this kart yet: record one on the kart’s page to link it here.'
+                : 'Its jets fill the fields below; change any the kart ran differently.')}
+          </span>
+        }
+      >
+        <HTMLSelect
+          id="log-setup"
+          large
+          fill
+          value={f.setupId}
+          aria-describedby="log-setup-help"
+          onChange={(e) => pickSetup(e.currentTarget.value)}
+        >
+          <option value="">None</option>
+          {setups.map((s, i) => (
+            <option key={s.id} value={s.id}>
+              {setupLabel(s)}
+              {i === 0 ? ' (latest)' : ''}
+            </option>
+          ))}
+        </HTMLSelect>
+      </FormGroup>
       <div className="fw-jet-row">
-        <TextField id="log-main" label="Main jet" inputMode="decimal" value={f.mainJet} onChange={(v) => set({ mainJet: v })} errors={errors('mainJet')} />
-        <TextField id="log-pilot" label="Pilot jet" inputMode="decimal" value={f.pilotJet} onChange={(v) => set({ pilotJet: v })} errors={errors('pilotJet')} />
+        <TextField id="log-main" label="Main jet" inputMode="decimal" value={f.mainJet} onChange={(v) => setJet('mainJet', v)} errors={errors('mainJet')} />
+        <TextField id="log-pilot" label="Pilot jet" inputMode="decimal" value={f.pilotJet} onChange={(v) => setJet('pilotJet', v)} errors={errors('pilotJet')} />
         <TextField
           id="log-clip"
           label="Needle clip groove"
           inputMode="numeric"
           value={f.needleClipGroove}
-          onChange={(v) => set({ needleClipGroove: v })}
+          onChange={(v) => setJet('needleClipGroove', v)}
           errors={errors('needleClipGroove')}
           hint="From the top, 1 = top"
         />
@@ -189,7 +242,7 @@ export function LogSessionForm({
           label="Air screw, turns out"
           inputMode="decimal"
           value={f.airScrewTurnsOut}
-          onChange={(v) => set({ airScrewTurnsOut: v })}
+          onChange={(v) => setJet('airScrewTurnsOut', v)}
           errors={errors('airScrewTurnsOut')}
         />
       </div>

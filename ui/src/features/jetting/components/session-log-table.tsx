@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Alert, Button, HTMLTable, Tag, type Intent } from '@blueprintjs/core';
 import { TrashIcon } from '@blueprintjs/icons';
+import { Link, generatePath } from 'react-router-dom';
 import {
   PLUG_COLOUR_LABELS,
   formatDensity,
@@ -8,10 +9,14 @@ import {
   formatTemperature,
   type JettingSessionDto,
   type Ran,
+  type SetupDto,
   type UnitPreferences,
 } from '@fuelwright/shared';
+import { paths } from '../../../app/paths';
 import { useNotify } from '../../../components/toaster';
+import { formatCalendarDate } from '../../../lib/setup-fields';
 import { useDeleteSession } from '../api/delete-session';
+import { setupJetSummary } from '../lib/setup-summary';
 
 const RAN_INTENT: Record<Ran, Intent> = { rich: 'warning', right: 'success', lean: 'danger' };
 const RAN_TEXT: Record<Ran, string> = { rich: 'Rich', right: 'Right', lean: 'Lean' };
@@ -23,15 +28,37 @@ export function formatLap(ms: number | null): string {
   return m > 0 ? `${m}:${(s - m * 60).toFixed(3).padStart(6, '0')}` : s.toFixed(3);
 }
 
+/**
+ * The setup a session ran, as a link to the kart's page (where its setups are listed); with the
+ * main jet and clip summary unless `short` (the phone line under the day).
+ */
+function SetupRef({ kartId, session, setups, short }: { kartId: string; session: JettingSessionDto; setups: readonly SetupDto[]; short?: boolean }) {
+  if (session.setupId === null) return short ? null : <span className="fw-muted">None</span>;
+  const setup = setups.find((s) => s.id === session.setupId);
+  const to = generatePath(paths.kart, { kartId });
+  const day = setup ? formatCalendarDate(setup.takenOn) : 'linked setup';
+  return (
+    <>
+      <Link to={to} className="fw-nowrap" aria-label={setup ? `Setup of ${day}: ${setupJetSummary(setup)}` : 'The linked setup'}>
+        {short ? `Setup ${day}` : day}
+      </Link>
+      {!short && setup && <div className="fw-muted fw-small">{setupJetSummary(setup)}</div>}
+    </>
+  );
+}
+
 /** The jetting log, newest first. Sessions are not edited: a wrong one is deleted and logged again. */
 export function SessionLogTable({
   kartId,
   sessions,
+  setups,
   units,
   canDelete,
 }: {
   kartId: string;
   sessions: readonly JettingSessionDto[];
+  /** The kart's setup snapshots, to name the one each session ran. */
+  setups: readonly SetupDto[];
   units: UnitPreferences;
   canDelete: boolean;
 }) {
@@ -54,6 +81,9 @@ export function SessionLogTable({
               </th>
               <th scope="col">Jets</th>
               <th scope="col" className="fw-hide-on-phone">
+                Setup used
+              </th>
+              <th scope="col" className="fw-hide-on-phone">
                 Plug
               </th>
               <th scope="col">Ran</th>
@@ -73,6 +103,11 @@ export function SessionLogTable({
                 <td>
                   <div className="fw-nowrap">{s.sessionOn}</div>
                   {s.track && <div className="fw-muted fw-small fw-break">{s.track}</div>}
+                  {s.setupId !== null && (
+                    <div className="fw-small fw-phone-only">
+                      <SetupRef kartId={kartId} session={s} setups={setups} short />
+                    </div>
+                  )}
                 </td>
                 <td className="fw-hide-on-phone">
                   {formatTemperature(s.temperatureC, units.temperature)}, {formatPressure(s.stationPressureHpa, units.pressure)},{' '}
@@ -82,6 +117,9 @@ export function SessionLogTable({
                 <td>
                   <div className="fw-nowrap">Main {s.mainJet}</div>
                   {s.pilotJet !== null && <div className="fw-muted fw-small fw-nowrap">Pilot {s.pilotJet}</div>}
+                </td>
+                <td className="fw-hide-on-phone fw-setup-cell">
+                  <SetupRef kartId={kartId} session={s} setups={setups} />
                 </td>
                 <td className="fw-hide-on-phone">{s.plugColour ? PLUG_COLOUR_LABELS[s.plugColour] : ''}</td>
                 <td>

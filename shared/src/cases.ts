@@ -16,7 +16,7 @@ export const CASE_STATE_LABELS: Record<CaseState, string> = {
   stopped: 'Stopped: see an engine builder',
 };
 
-export const CASE_EVENT_TYPES = ['opened', 'symptoms-reported', 'check-recorded', 'resolved', 'abandoned', 'stopped', 'check-recommended'] as const;
+export const CASE_EVENT_TYPES = ['opened', 'symptoms-reported', 'check-recorded', 'resolved', 'abandoned', 'stopped', 'check-recommended', 'facts-corrected'] as const;
 export type CaseEventType = (typeof CASE_EVENT_TYPES)[number];
 
 export const CASE_NOTE_MAX_LENGTH = 1000;
@@ -31,6 +31,16 @@ export interface OpenCaseRequest {
   conditions?: DiagnosisConditions;
   /** Checks already done before the case was saved (a visitor's quick diagnosis). */
   results?: { checkId: string; result: CheckResultValue; note?: string }[];
+}
+
+/**
+ * PUT /api/cases/:id/facts: corrects what an open case was opened with (a setup entered wrong,
+ * the day's air measured later). Each part given replaces the case's; the carburettor kind stays
+ * the kart's. The ranking is made again with the results so far; the opening ranking is kept.
+ */
+export interface CorrectCaseFactsRequest {
+  setup?: SetupSnapshot;
+  conditions?: DiagnosisConditions;
 }
 
 /** PUT /api/cases/:id/symptoms */

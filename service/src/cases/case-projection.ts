@@ -20,6 +20,7 @@ export interface CaseEventPayloads {
   resolved: { causeId: string; fix: string; note: string };
   abandoned: { reason: string };
   'check-recommended': { checkId: string; reason: string };
+  'facts-corrected': { setup: SetupSnapshot; conditions: DiagnosisConditions; rank: RankResponse };
 }
 
 export type CaseEvent = {
@@ -48,7 +49,7 @@ export class CaseEventError extends Error {}
 
 /** Which events each state accepts. A stopped case can still be resolved (after the engine builder's repair). */
 const ACCEPTS: Record<CaseState, ReadonlySet<CaseEventType>> = {
-  open: new Set(['symptoms-reported', 'check-recorded', 'stopped', 'resolved', 'abandoned', 'check-recommended']),
+  open: new Set(['symptoms-reported', 'check-recorded', 'stopped', 'resolved', 'abandoned', 'check-recommended', 'facts-corrected']),
   stopped: new Set(['resolved', 'abandoned']),
   resolved: new Set(),
   abandoned: new Set(),
@@ -98,6 +99,8 @@ export function applyEvent(current: CaseProjection | null, event: CaseEvent): Ca
       return { ...current, state: 'resolved', resolution: { ...event.payload, at, by } };
     case 'abandoned':
       return { ...current, state: 'abandoned', abandonedReason: event.payload.reason };
+    case 'facts-corrected':
+      return { ...current, setup: event.payload.setup, conditions: event.payload.conditions, rank: event.payload.rank };
     case 'check-recommended': {
       const { checkId, reason } = event.payload;
       const recommendations = [...(current.recommendations ?? []).filter((r) => r.checkId !== checkId), { checkId, reason, by, at }];

@@ -18,5 +18,7 @@ export function summarizeEvent(e: CaseEvent): string {
       return `Abandoned${e.payload.reason ? `: ${e.payload.reason}` : ''}`;
     case 'check-recommended':
       return `Recommended check ${e.payload.checkId}: ${e.payload.reason}`;
+    case 'facts-corrected':
+      return `Setup and air corrected${e.payload.setup.mainJet !== undefined ? ` (main jet ${e.payload.setup.mainJet})` : ''}`;
   }
 }

@@ -5,9 +5,10 @@ import type { CaseDto, CaseListResponse } from '@fuelwright/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { UuidParam } from '../common/uuid-param.js';
 import type { SessionUser } from '../common/session-user.js';
-import { AbandonCaseDto, OpenCaseDto, RecordCheckResultDto, ReportSymptomsDto, ResolveCaseDto } from './dto/case.dto.js';
+import { AbandonCaseDto, CorrectCaseFactsDto, OpenCaseDto, RecordCheckResultDto, ReportSymptomsDto, ResolveCaseDto } from './dto/case.dto.js';
 import { ListCasesDto } from './dto/list-cases.dto.js';
 import { AbandonCaseCommand } from './commands/abandon-case.command.js';
+import { CorrectCaseFactsCommand } from './commands/correct-case-facts.command.js';
 import { OpenCaseCommand } from './commands/open-case.command.js';
 import { RecordCheckResultCommand } from './commands/record-check-result.command.js';
 import { ReportSymptomsCommand } from './commands/report-symptoms.command.js';
@@ -41,6 +42,12 @@ export class CasesController {
   @Put(':id/symptoms')
   reportSymptoms(@CurrentUser() user: SessionUser, @UuidParam('id', 'case') id: string, @Body() dto: ReportSymptomsDto): Promise<CaseDto> {
     return this.commands.execute(new ReportSymptomsCommand(user, id, dto.symptoms));
+  }
+
+  /** Corrects the setup and/or the day's air of an open case; ranks again. */
+  @Put(':id/facts')
+  correctFacts(@CurrentUser() user: SessionUser, @UuidParam('id', 'case') id: string, @Body() dto: CorrectCaseFactsDto): Promise<CaseDto> {
+    return this.commands.execute(new CorrectCaseFactsCommand(user, id, dto));
   }
 
   @Post(':id/results')

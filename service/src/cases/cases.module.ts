@@ -6,6 +6,7 @@ import { CaseRanking } from './case-ranking.js';
 import { CaseStore } from './case-store.js';
 import { CaseAudience } from './case-audience.js';
 import { AbandonCaseHandler } from './commands/abandon-case.handler.js';
+import { CorrectCaseFactsHandler } from './commands/correct-case-facts.handler.js';
 import { OpenCaseHandler } from './commands/open-case.handler.js';
 import { RecordCheckResultHandler } from './commands/record-check-result.handler.js';
 import { ReportSymptomsHandler } from './commands/report-symptoms.handler.js';
@@ -16,6 +17,7 @@ import { ListCasesHandler } from './queries/list-cases.handler.js';
 const handlers = [
   OpenCaseHandler,
   ReportSymptomsHandler,
+  CorrectCaseFactsHandler,
   RecordCheckResultHandler,
   ResolveCaseHandler,
   AbandonCaseHandler,

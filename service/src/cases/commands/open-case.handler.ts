@@ -11,6 +11,7 @@ import { CaseRanking } from '../case-ranking.js';
 import { CaseStore, type NewCaseEvent } from '../case-store.js';
 import { OpenCaseCommand } from './open-case.command.js';
 import { AirDensityBaseline } from '../../jetting/air-density-baseline.js';
+import { withDensityChange } from '../case-conditions.js';
 
 @CommandHandler(OpenCaseCommand)
 export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
@@ -30,13 +31,7 @@ export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
     }
     this.access.require(user, kart, 'edit', 'kart');
     const setup: SetupSnapshot = { ...(input.setup ?? (await this.latestSetup(kart.id))), carburettorKind: kart.carburettorKind };
-    let conditions = input.conditions ?? {};
-    // Today's air against the last jetting-log session that ran right: the fact behind "air density changed".
-    if (conditions.densityChangePct === undefined && conditions.today?.densityKgM3) {
-      const day = await this.airBaseline.baselineOf(kart.id);
-      const pct = await this.airBaseline.densityChangeSince(kart.id, conditions.today.densityKgM3);
-      if (day && pct !== null) conditions = { ...conditions, densityChangePct: pct, reference: { ...conditions.reference, densityKgM3: day.densityKgM3 } };
-    }
+    const conditions = await withDensityChange(this.airBaseline, kart.id, input.conditions ?? {});
     const symptoms = input.symptoms.map((s) => (typeof s === 'string' ? { id: s } : s));
     const version = this.ranking.currentVersion;
 

@@ -14,14 +14,17 @@ import {
   ValidateNested,
 } from 'class-validator';
 import {
+  CARBURETTOR_KINDS,
   CASE_NOTE_MAX_LENGTH,
   CHECK_RESULT_VALUES,
   ENGINE_TEMPS,
   THROTTLE_BANDS,
   TRACK_POSITIONS,
+  type CarburettorKind,
   type CheckResultValue,
   type DiagnosisConditions,
   type EngineTemp,
+  type CorrectCaseFactsRequest,
   type OpenCaseRequest,
   type RecordCheckResultRequest,
   type ResolveCaseRequest,
@@ -138,6 +141,28 @@ export class OpenCaseDto implements OpenCaseRequest {
   @ValidateNested({ each: true })
   @Type(() => PriorResultDto)
   results?: PriorResultDto[];
+}
+
+/** A corrected setup may carry the carburettor kind the case showed; the kart's own is kept whatever it says. */
+export class CaseSetupCorrectionDto extends CaseSetupDto {
+  @ApiPropertyOptional({ enum: CARBURETTOR_KINDS, description: 'Ignored: the kart’s own kind is kept' })
+  @IsOptional()
+  @IsIn(CARBURETTOR_KINDS, { message: `carburettorKind must be one of ${CARBURETTOR_KINDS.join(', ')}` })
+  carburettorKind?: CarburettorKind;
+}
+
+export class CorrectCaseFactsDto implements CorrectCaseFactsRequest {
+  @ApiPropertyOptional({ type: CaseSetupCorrectionDto })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CaseSetupCorrectionDto)
+  setup?: CaseSetupCorrectionDto;
+
+  @ApiPropertyOptional({ type: CaseConditionsDto })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CaseConditionsDto)
+  conditions?: CaseConditionsDto;
 }
 
 export class ReportSymptomsDto {

@@ -3,6 +3,7 @@ import {
   AnnotationIcon,
   ClipboardIcon,
   DisableIcon,
+  EditIcon,
   EndorsedIcon,
   FolderNewIcon,
   HandIcon,
@@ -20,6 +21,7 @@ const ICONS: Partial<Record<CaseEventType, ComponentType<SVGIconProps>>> = {
   resolved: EndorsedIcon,
   abandoned: DisableIcon,
   stopped: HandIcon,
+  'facts-corrected': EditIcon,
 };
 
 /** Every step of the case in order: what happened, who did it and when, and the top causes after it. */

@@ -1,0 +1,1 @@
+ALTER TYPE "public"."case_event_type" ADD VALUE 'facts-corrected';

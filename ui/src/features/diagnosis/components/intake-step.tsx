@@ -1,12 +1,14 @@
-import { useEffect, useState, type FormEvent } from 'react';
+import { useCallback, useEffect, useState, type FormEvent } from 'react';
 import { Button, Callout, FormGroup, HTMLSelect, Radio, RadioGroup, Section, SectionCard } from '@blueprintjs/core';
 import { ArrowRightIcon, PlusIcon } from '@blueprintjs/icons';
 import { CARBURETTOR_KIND_LABELS, type CarburettorKind, type KartDto } from '@fuelwright/shared';
 import { LinkButton } from '../../../components/link-button';
 import { paths } from '../../../app/paths';
 import type { WalkThroughSend, WalkThroughSnapshot } from '../hooks/use-walk-through';
+import { conditionsDraftEntered, type ConditionsDraft } from '../machines/conditions-draft';
 import type { SetupDraftField } from '../machines/walk-through-model';
 import type { CatalogLookup } from './catalog-lookup';
+import { ConditionsFields } from './conditions-fields';
 import { KartFormInline } from './kart-form-inline';
 import { SetupFields } from './setup-fields';
 import { SymptomPicker } from './symptom-picker';
@@ -16,6 +18,9 @@ const KIND_HELP: Record<CarburettorKind, string> = {
     'A fuel pump keeps the float bowl over-full and a return tube takes the extra back to the tank. Foam blocks in the bowl stop the fuel sloshing.',
   'float-valve': 'A float and a small needle valve in the bowl shut the fuel off when the bowl is full.',
 };
+
+/** The request fields the air and fuel inputs stand for (a 400 on one of them shows under it). */
+const CONDITION_FIELD = /^conditions\.((today|reference)\.(temperatureC|relativeHumidityPct|stationPressureHpa)|fuelAgeDays|densityChangePct)$/;
 
 function formatDay(iso: string): string {
   const date = new Date(`${iso}T12:00:00`);
@@ -46,7 +51,11 @@ export function IntakeStep({
     return local ? [local] : (serverFields[key] ?? []);
   };
   const setupErrors = (field: SetupDraftField) => fieldErrors(`setup.${field}`);
-  const placed = new Set(['kartId', 'carburettorKind', ...Object.keys(serverFields).filter((k) => k.startsWith('setup.'))]);
+  const placed = new Set([
+    'kartId',
+    'carburettorKind',
+    ...Object.keys(serverFields).filter((k) => k.startsWith('setup.') || CONDITION_FIELD.test(k)),
+  ]);
   const otherServerMessages = Object.entries(serverFields)
     .filter(([key]) => !placed.has(key))
     .flatMap(([key, messages]) => messages.map((m) => `${key.startsWith('symptoms') ? 'Symptom' : key}: ${m}`));
@@ -55,6 +64,11 @@ export function IntakeStep({
   // A message about a setup value opens the setup, so the message is seen.
   const setupHasErrors = [...Object.keys(ctx.formErrors), ...Object.keys(serverFields)].some((k) => k.startsWith('setup.'));
   const setupOpen = setupShown || setupHasErrors;
+  // Today's air and fuel: closed until wanted; open when something was typed or a message is there.
+  const [airShown, setAirShown] = useState(() => conditionsDraftEntered(ctx.conditionsDraft));
+  const airHasErrors = [...Object.keys(ctx.formErrors), ...Object.keys(serverFields)].some((k) => CONDITION_FIELD.test(k));
+  const airOpen = airShown || airHasErrors;
+  const changeConditions = useCallback((draft: ConditionsDraft) => send({ type: 'INTAKE.CONDITIONS', draft }), [send]);
 
   // A kart given in the address (?kartId=): take its carburettor and its latest setup once loaded.
   useEffect(() => {
@@ -179,31 +193,49 @@ export function IntakeStep({
       )}
 
       {caseOpen ? (
-        <p className="fw-muted">The setup stays as recorded when the case was opened; only the symptoms change here.</p>
+        <p className="fw-muted">The setup and the day's air stay as recorded when the case was opened; only the symptoms change here.</p>
       ) : (
         (!isCase || ctx.kartId) && (
-          <Section
-            className="fw-diag-section"
-            title={isCase ? 'Setup today' : 'Setup (optional)'}
-            subtitle={
-              isCase
-                ? ctx.setupFrom
-                  ? `Filled in from the setup of ${formatDay(ctx.setupFrom)}. Change anything that is different today.`
-                  : 'No setup recorded for this kart yet: fill in what you know.'
-                : 'Fill in what you know; leave the rest empty. It sharpens the ranking.'
-            }
-            collapsible
-            collapseProps={{ isOpen: setupOpen, onToggle: () => setSetupShown(!setupOpen) }}
-          >
-            <SectionCard>
-              <SetupFields
-                draft={ctx.setupDraft}
-                onChange={(field, value) => send({ type: 'INTAKE.SETUP', field, value })}
-                errorsFor={setupErrors}
-                disabled={snapshot.matches({ intake: 'prefilling' })}
-              />
-            </SectionCard>
-          </Section>
+          <>
+            <Section
+              className="fw-diag-section"
+              title={isCase ? 'Setup today' : 'Setup (optional)'}
+              subtitle={
+                isCase
+                  ? ctx.setupFrom
+                    ? `Filled in from the setup of ${formatDay(ctx.setupFrom)}. Change anything that is different today.`
+                    : 'No setup recorded for this kart yet: fill in what you know.'
+                  : 'Fill in what you know; leave the rest empty. It sharpens the ranking.'
+              }
+              collapsible
+              collapseProps={{ isOpen: setupOpen, onToggle: () => setSetupShown(!setupOpen) }}
+            >
+              <SectionCard>
+                <SetupFields
+                  draft={ctx.setupDraft}
+                  onChange={(field, value) => send({ type: 'INTAKE.SETUP', field, value })}
+                  errorsFor={setupErrors}
+                  disabled={snapshot.matches({ intake: 'prefilling' })}
+                />
+              </SectionCard>
+            </Section>
+            <Section
+              className="fw-diag-section"
+              title="Today's air and fuel (optional)"
+              subtitle="Air denser or thinner than on the day the setup was right, and old fuel, change what is likely."
+              collapsible
+              collapseProps={{ isOpen: airOpen, onToggle: () => setAirShown(!airOpen) }}
+            >
+              <SectionCard>
+                <ConditionsFields
+                  draft={ctx.conditionsDraft}
+                  onChange={changeConditions}
+                  errorsFor={fieldErrors}
+                  kartId={isCase ? ctx.kartId : null}
+                />
+              </SectionCard>
+            </Section>
+          </>
         )
       )}
 

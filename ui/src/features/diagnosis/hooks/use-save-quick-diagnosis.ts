@@ -2,16 +2,20 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CaseDto, OpenCaseRequest } from '@fuelwright/shared';
 import { openCase, storeCase } from '../api/open-case';
 import { resolveCase } from '../api/resolve-case';
+import { parseConditionsDraft } from '../machines/conditions-draft';
 import type { WalkThroughContext } from '../machines/walk-through.machine';
 import { parseSetupDraft, symptomsForRequest } from '../machines/walk-through-model';
 import { clearWalkThrough, QUICK_DIAGNOSIS_KEY } from './walk-through-storage';
 
-/** The case to open from a quick diagnosis: its symptoms, the setup values given, and every result with its note. */
+/** The case to open from a quick diagnosis: its symptoms, the setup values and the day's air given, and every result with its note. */
 export function openCaseRequestFrom(quick: WalkThroughContext, kartId: string): OpenCaseRequest {
   const { setup } = parseSetupDraft(quick.setupDraft);
   const request: OpenCaseRequest = { kartId, symptoms: symptomsForRequest(quick.symptoms) };
   // Without any value given, the server takes the kart's latest setup snapshot instead.
   if (Object.keys(setup).length > 0) request.setup = setup;
+  // The ranking the visitor saw was made with these conditions; the case keeps them.
+  const { conditions } = parseConditionsDraft(quick.conditionsDraft);
+  if (conditions) request.conditions = conditions;
   if (quick.results.length > 0) {
     request.results = quick.results.map((r) => ({ checkId: r.checkId, result: r.result, ...(r.note ? { note: r.note } : {}) }));
   }

@@ -5,6 +5,7 @@
  * so that a snapshot of an older machine is dropped rather than restored into the wrong place.
  */
 import type { Snapshot } from 'xstate';
+import { emptyConditionsDraft } from '../machines/conditions-draft';
 import type { WalkThroughContext } from '../machines/walk-through.machine';
 
 /** Bump when the machine's states or context change shape. */
@@ -39,6 +40,8 @@ export function loadWalkThrough(key: string): Stored['snapshot'] | null {
     if (stored.v !== WALK_THROUGH_STORAGE_VERSION || !snapshot || snapshot.status !== 'active') return null;
     const context = snapshot.context as Partial<WalkThroughContext> | undefined;
     if (!context || (context.mode !== 'quick' && context.mode !== 'case') || !Array.isArray(context.results)) return null;
+    // Stored before the intake took the day's air and fuel: the same snapshot with nothing typed there.
+    if (!context.conditionsDraft) return { ...snapshot, context: { ...(context as WalkThroughContext), conditionsDraft: emptyConditionsDraft() } };
     return snapshot;
   } catch {
     return null;

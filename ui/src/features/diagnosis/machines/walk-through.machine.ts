@@ -45,6 +45,7 @@ import {
   type WalkThroughError,
   type WalkThroughMode,
 } from './walk-through-model';
+import { emptyConditionsDraft, parseConditionsDraft, type ConditionsDraft } from './conditions-draft';
 
 /** Where the walk-through was when it was last at rest: reconciling with the server returns there. */
 export type WalkThroughPlace = 'intake' | 'ranking' | 'check' | 'resolve';
@@ -73,6 +74,8 @@ export interface WalkThroughContext {
   /** Day of the kart's setup snapshot the draft was filled from, if any. */
   setupFrom: string | null;
   setupTouched: boolean;
+  /** Today's air, the reference day and the fuel age, as typed (see conditions-draft.ts). */
+  conditionsDraft: ConditionsDraft;
   /** Messages found before sending (missing symptom, kart, setup values out of range), by field. */
   formErrors: Record<string, string>;
   // diagnosis
@@ -105,6 +108,7 @@ export type WalkThroughEvent =
   | { type: 'INTAKE.SYMPTOMS'; symptoms: SymptomReport[] }
   | { type: 'INTAKE.CARBURETTOR'; carburettorKind: CarburettorKind | null }
   | { type: 'INTAKE.SETUP'; field: SetupDraftField; value: string }
+  | { type: 'INTAKE.CONDITIONS'; draft: ConditionsDraft }
   | { type: 'INTAKE.KART'; kartId: string; carburettorKind: CarburettorKind; displacementCc: number }
   | { type: 'INTAKE.SUBMIT' }
   | { type: 'INTAKE.EDIT' }
@@ -160,6 +164,7 @@ function emptyContext(input: WalkThroughInput): WalkThroughContext {
     setupDraft: {},
     setupFrom: null,
     setupTouched: false,
+    conditionsDraft: emptyConditionsDraft(),
     formErrors: {},
     cautionCheckIds: [...input.cautionCheckIds],
     rank: null,
@@ -193,6 +198,7 @@ export function intakeErrors(context: WalkThroughContext): Record<string, string
     for (const [field, message] of Object.entries(parseSetupDraft(context.setupDraft).errors)) {
       errors[`setup.${field}`] = message;
     }
+    Object.assign(errors, parseConditionsDraft(context.conditionsDraft).errors);
   }
   return errors;
 }
@@ -202,6 +208,8 @@ function rankRequest(context: WalkThroughContext, results: RecordedResult[]): Ra
     symptoms: symptomsForRequest(context.symptoms),
     setup: { ...parseSetupDraft(context.setupDraft).setup, ...(context.carburettorKind ? { carburettorKind: context.carburettorKind } : {}) },
   };
+  const { conditions } = parseConditionsDraft(context.conditionsDraft);
+  if (conditions) request.conditions = conditions;
   if (results.length > 0) request.results = resultsMap(results);
   if (context.displacementCc) request.engineDisplacementCc = context.displacementCc;
   return request;
@@ -393,6 +401,20 @@ export const walkThroughMachine = setup({
             formErrors: ({ context, event }) => without(context.formErrors, `setup.${event.field}`),
           }),
         },
+        'INTAKE.CONDITIONS': {
+          actions: assign({
+            conditionsDraft: ({ event }) => event.draft,
+            // A message goes once its field reads right; one still wrong stays until it is fixed.
+            formErrors: ({ context, event }) => {
+              const still = parseConditionsDraft(event.draft).errors;
+              return Object.fromEntries(
+                Object.entries(context.formErrors)
+                  .filter(([key]) => !key.startsWith('conditions.') || key in still)
+                  .map(([key, message]) => [key, key.startsWith('conditions.') ? still[key] : message]),
+              );
+            },
+          }),
+        },
       },
       states: {
         editing: {
@@ -462,11 +484,13 @@ export const walkThroughMachine = setup({
             src: 'openCase',
             input: ({ context }) => {
               const { setup: values } = parseSetupDraft(context.setupDraft);
+              const { conditions } = parseConditionsDraft(context.conditionsDraft);
               return {
                 kartId: context.kartId!,
                 symptoms: symptomsForRequest(context.symptoms),
                 // Untouched, the server takes the kart's latest snapshot itself.
                 ...(context.setupTouched ? { setup: values } : {}),
+                ...(conditions ? { conditions } : {}),
               };
             },
             onDone: [

@@ -149,6 +149,57 @@ describe('quick diagnosis page', () => {
     await waitFor(() => expect(premix).toHaveAccessibleDescription('must be at most 100'));
     expect(screen.getByRole('checkbox', { name: /Symptom one/ })).toBeChecked();
   });
+
+  it("sends today's air and the fuel age typed in the closed-by-default section; an impossible humidity is named and blocks the ranking", async () => {
+    const sent: RankRequest[] = [];
+    fakeApi((body) => {
+      sent.push(body);
+      return { status: 200, body: rankReply() };
+    });
+    const user = userEvent.setup();
+    renderApp('/diagnose');
+    await user.click(await screen.findByRole('checkbox', { name: /Symptom one/ }));
+    await user.click(screen.getByRole('radio', { name: /Pump-around slide carburettor/ }));
+    // Closed until wanted.
+    expect(screen.queryByLabelText('Days since the fuel was mixed')).toBeNull();
+    await user.click(screen.getByText("Today's air and fuel (optional)"));
+    const today = screen.getByRole('group', { name: 'Today' });
+    await user.type(within(today).getByLabelText('Air temperature (°C)'), '12');
+    await user.type(within(today).getByLabelText('Relative humidity (%)'), '140');
+    await user.type(within(today).getByLabelText('Station pressure (hPa)'), '1002');
+    await user.type(screen.getByLabelText('Days since the fuel was mixed'), '35');
+    const before = screen.getByRole('group', { name: 'The day the setup was last right' });
+    await user.type(within(before).getByLabelText('Air temperature (°C)'), '24');
+    await user.type(within(before).getByLabelText('Relative humidity (%)'), '50');
+    await user.type(within(before).getByLabelText('Station pressure (hPa)'), '1002');
+
+    await user.click(screen.getByRole('button', { name: 'Show the likely causes' }));
+    // Relative humidity is 0 to 100 % of saturation (WMO-No. 8, Guide to Instruments and Methods of Observation).
+    const humidity = within(today).getByLabelText('Relative humidity (%)');
+    expect(humidity).toHaveAccessibleDescription('Relative humidity today: between 0 and 100 %.');
+    expect(sent).toHaveLength(0);
+    expect(humidity).toHaveValue('140');
+    expect(screen.getByLabelText('Days since the fuel was mixed')).toHaveValue('35');
+
+    await user.clear(humidity);
+    await user.type(humidity, '80');
+    expect(humidity).not.toHaveAccessibleDescription(/between 0 and 100/);
+    // What the app works out, in trade words. Colder air at the same pressure is denser (ideal gas law, from memory).
+    expect(screen.getByText(/^The air is [\d.]+ % denser than on the day it ran right$/)).toBeInTheDocument();
+    expect(screen.getByText(/Denser air leans the mixture/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Show the likely causes' }));
+    await screen.findByRole('heading', { name: 'Likely causes' });
+    expect(sent[0].conditions).toMatchObject({
+      today: { temperatureC: 12, relativeHumidityPct: 80, stationPressureHpa: 1002 },
+      reference: { temperatureC: 24, relativeHumidityPct: 50, stationPressureHpa: 1002 },
+      fuelAgeDays: 35,
+    });
+    expect(sent[0].conditions?.densityChangePct).toBeGreaterThan(0);
+
+    // Kept in this browser: back at the intake after a reload, nothing typed is lost.
+    const stored = JSON.parse(localStorage.getItem(QUICK_DIAGNOSIS_KEY)!) as { snapshot: { context: { conditionsDraft: { today: { humidity: string } } } } };
+    expect(stored.snapshot.context.conditionsDraft.today.humidity).toBe('80');
+  });
 });
 
 const AT = '2026-11-20T10:00:00.000Z';

@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { createActor } from 'xstate';
+import { emptyConditionsDraft } from '../machines/conditions-draft';
 import { walkThroughMachine } from '../machines/walk-through.machine';
 import { openCaseRequestFrom } from './use-save-quick-diagnosis';
 import { loadQuickDiagnosis, loadWalkThrough, QUICK_DIAGNOSIS_KEY, saveWalkThrough, WALK_THROUGH_STORAGE_VERSION } from './walk-through-storage';
@@ -33,6 +34,15 @@ describe('walk-through storage', () => {
     actor.stop();
     saveWalkThrough(QUICK_DIAGNOSIS_KEY, actor.getPersistedSnapshot());
     expect(loadWalkThrough(QUICK_DIAGNOSIS_KEY)).toBeNull();
+  });
+
+  it("gives a snapshot kept before the intake took the day's air an empty air and fuel draft, the rest as it was", () => {
+    const persisted = quickActor().getPersistedSnapshot() as unknown as { context: Record<string, unknown> };
+    delete persisted.context.conditionsDraft;
+    localStorage.setItem(QUICK_DIAGNOSIS_KEY, JSON.stringify({ v: WALK_THROUGH_STORAGE_VERSION, snapshot: persisted }));
+    const loaded = loadWalkThrough(QUICK_DIAGNOSIS_KEY);
+    expect(loaded?.context.conditionsDraft).toEqual(emptyConditionsDraft());
+    expect(loaded?.context.carburettorKind).toBe('pump-around');
   });
 });
 

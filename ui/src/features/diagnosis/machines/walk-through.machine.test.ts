@@ -17,7 +17,9 @@ import type {
   SetupDto,
   SymptomReport,
 } from '@fuelwright/shared';
+import { densityChangePct } from '@fuelwright/shared';
 import { ApiError } from '../../../lib/api-client';
+import { emptyConditionsDraft, type ConditionsDraft, type ReferenceSession } from './conditions-draft';
 import { walkThroughMachine, type WalkThroughInput } from './walk-through.machine';
 
 // ---------------------------------------------------------------------------------------------
@@ -772,5 +774,93 @@ describe('walk-through machine, case mode', () => {
     await atRest(actor);
     expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
     expect(actor.getSnapshot().context.error).toBeNull();
+  });
+});
+
+describe("walk-through machine, the day's air and fuel", () => {
+  /** A draft with today's air and a reference day typed in hPa and °C (the figures are plumbing, not trade facts). */
+  function draft(patch: Partial<ConditionsDraft> = {}): ConditionsDraft {
+    const empty = emptyConditionsDraft();
+    return {
+      ...empty,
+      units: { temperature: 'C', pressure: 'hPa', length: 'm' },
+      today: { ...empty.today, temperature: '5', humidity: '50', stationPressure: '1000' },
+      reference: { ...empty.reference, temperature: '30', humidity: '50', stationPressure: '1000' },
+      fuelAgeDays: '40',
+      ...patch,
+    };
+  }
+
+  it('quick mode: the air and fuel age go into every rank request, the change worked out from both days', async () => {
+    const h = harness();
+    const actor = start(h);
+    actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG] });
+    actor.send({ type: 'INTAKE.CARBURETTOR', carburettorKind: 'pump-around' });
+    actor.send({ type: 'INTAKE.CONDITIONS', draft: draft() });
+    actor.send({ type: 'INTAKE.SUBMIT' });
+    await atRest(actor);
+    expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
+    const conditions = h.rankRequests[0].conditions!;
+    expect(conditions.today).toEqual({ temperatureC: 5, relativeHumidityPct: 50, stationPressureHpa: 1000, densityKgM3: expect.any(Number) });
+    expect(conditions.reference).toEqual({ temperatureC: 30, relativeHumidityPct: 50, stationPressureHpa: 1000, densityKgM3: expect.any(Number) });
+    expect(conditions.fuelAgeDays).toBe(40);
+    // The change sent is the one of the two densities sent (no second sum on the server).
+    expect(conditions.densityChangePct).toBeCloseTo(densityChangePct(conditions.reference!.densityKgM3!, conditions.today!.densityKgM3!), 10);
+    // Same pressure and humidity, 25 °C colder: denser air (ideal gas law, density ∝ p/T; from memory).
+    expect(conditions.densityChangePct).toBeGreaterThan(0);
+
+    // Re-ranking after a check keeps them.
+    actor.send({ type: 'CHECKS.START' });
+    await record(actor, 'looks-fine');
+    expect(h.rankRequests[1].conditions).toEqual(conditions);
+  });
+
+  it('an impossible humidity is named and blocks the ranking; what was typed stays, and fixing it clears the message', async () => {
+    const h = harness();
+    const actor = start(h);
+    actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG] });
+    actor.send({ type: 'INTAKE.CARBURETTOR', carburettorKind: 'pump-around' });
+    const bad = draft({ today: { ...draft().today, humidity: '140' }, fuelAgeDays: '-2' });
+    actor.send({ type: 'INTAKE.CONDITIONS', draft: bad });
+    actor.send({ type: 'INTAKE.SUBMIT' });
+    const { formErrors, conditionsDraft } = actor.getSnapshot().context;
+    // Relative humidity is a fraction of saturation, 0 to 100 % (WMO-No. 8, Guide to Instruments and Methods of Observation).
+    expect(formErrors['conditions.today.relativeHumidityPct']).toBe('Relative humidity today: between 0 and 100 %.');
+    expect(formErrors['conditions.fuelAgeDays']).toMatch(/^Days since the fuel was mixed: /);
+    expect(actor.getSnapshot().value).toEqual({ intake: 'editing' });
+    expect(h.rankRequests).toHaveLength(0);
+    expect(conditionsDraft).toEqual(bad);
+
+    actor.send({ type: 'INTAKE.CONDITIONS', draft: { ...bad, today: { ...bad.today, humidity: '70' } } });
+    expect(actor.getSnapshot().context.formErrors['conditions.today.relativeHumidityPct']).toBeUndefined();
+    expect(actor.getSnapshot().context.formErrors['conditions.fuelAgeDays']).toBeDefined();
+    actor.send({ type: 'INTAKE.CONDITIONS', draft: { ...bad, today: { ...bad.today, humidity: '70' }, fuelAgeDays: '2' } });
+    actor.send({ type: 'INTAKE.SUBMIT' });
+    await atRest(actor);
+    expect(h.rankRequests[0].conditions?.today?.relativeHumidityPct).toBe(70);
+    expect(h.rankRequests[0].conditions?.fuelAgeDays).toBe(2);
+  });
+
+  it('case mode: the new case is opened with the air, the reference day taken from the jetting log', async () => {
+    const h = harness();
+    const actor = start(h, { mode: 'case' });
+    actor.send({ type: 'INTAKE.KART', kartId: 'kart-1', carburettorKind: 'pump-around', displacementCc: 125 });
+    await atRest(actor);
+    const session: ReferenceSession = { sessionId: 's-1', sessionOn: '2026-10-04', temperatureC: 25, stationPressureHpa: 990, relativeHumidityPct: 60, densityKgM3: 1.15 };
+    actor.send({ type: 'INTAKE.CONDITIONS', draft: draft({ referenceFrom: 'log', referenceSession: session, fuelAgeDays: '' }) });
+    actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG] });
+    actor.send({ type: 'INTAKE.SUBMIT' });
+    await atRest(actor);
+    const sent = h.server.calls[0].input as OpenCaseRequest;
+    expect(sent.conditions?.reference).toEqual({ temperatureC: 25, stationPressureHpa: 990, relativeHumidityPct: 60, densityKgM3: 1.15 });
+    expect(sent.conditions?.today?.temperatureC).toBe(5);
+    expect(sent.conditions?.densityChangePct).toBeCloseTo(densityChangePct(1.15, sent.conditions!.today!.densityKgM3!), 10);
+    expect(sent.conditions).not.toHaveProperty('fuelAgeDays');
+  });
+
+  it('nothing typed: no conditions in the request', async () => {
+    const h = harness();
+    await quickAtRanking(h);
+    expect(h.rankRequests[0]).not.toHaveProperty('conditions');
   });
 });

@@ -145,6 +145,51 @@ async function quickDiagnosis(page: Page, baseUrl: string, tag: string, catalog:
   return { recorded };
 }
 
+/**
+ * Today's air and the fuel age in a visitor's quick diagnosis: the closed section opened, today
+ * hot and the day it ran right cold at the same pressure (thinner air today), the fuel mixed 40
+ * days ago, a rich blubber; the ranking's reasons then name the air and the fuel's age.
+ * Screenshots named `<tag>-...`.
+ */
+async function airAndFuel(page: Page, baseUrl: string, tag: string): Promise<void> {
+  await page.goto(`${baseUrl}/diagnose`);
+  await waitForScreen(page, 'intake');
+  await pickSymptom(page, 'rich-blubber');
+  await page.getByText('Pump-around slide carburettor', { exact: true }).click();
+  const fuelAge = page.getByLabel('Days since the fuel was mixed');
+  expect(await fuelAge.count(), 'the section starts closed').toBe(0);
+  await page.getByText("Today's air and fuel (optional)").click();
+  const today = page.getByRole('group', { name: 'Today', exact: true });
+  await today.getByLabel('Air temperature (°C)').fill('32');
+  await today.getByLabel('Relative humidity (%)').fill('60');
+  await today.getByLabel('Station pressure (hPa)').fill('1000');
+  await fuelAge.fill('40');
+  const then = page.getByRole('group', { name: 'The day the setup was last right' });
+  await then.getByLabel('Air temperature (°C)').fill('8');
+  await then.getByLabel('Relative humidity (%)').fill('60');
+  await then.getByLabel('Station pressure (hPa)').fill('1000');
+  // 24 °C warmer at the same pressure: about 8 % thinner air (ideal gas law, density ∝ p/T; from memory),
+  // and thinner air richens the mixture (common practice, no published source).
+  const readout = page.locator('.fw-diag-air-readout');
+  await expect.poll(() => readout.innerText(), WAIT).toMatch(/The air is [\d.]+ % thinner than on the day it ran right/);
+  await expect.poll(() => readout.innerText(), WAIT).toContain('Thinner air richens the mixture');
+  await snap(page, `${tag}-01-intake`);
+
+  await page.getByRole('button', { name: 'Show the likely causes' }).click();
+  await waitForScreen(page, 'ranking');
+  await shownCauses(page);
+  // The rules that fire on a density change of -3 % or more and on fuel 30 days old or more
+  // (rules/src/rulesets/1.0.0/rules/jetting-and-air.json, fuel-supply.json).
+  const air = page.locator('[data-cause="air-density-changed"]');
+  await air.getByRole('button', { name: /^Why\? \(\d+\)$/ }).click();
+  await expect.poll(() => air.locator('.fw-diag-reasons').innerText(), WAIT).toMatch(/thinner than when the jetting was right; thinner air richens the mixture/);
+  const fuel = page.locator('[data-cause="water-or-stale-fuel"]');
+  await fuel.getByRole('button', { name: /^Why\? \(\d+\)$/ }).click();
+  await expect.poll(() => fuel.locator('.fw-diag-reasons').innerText(), WAIT).toContain('The fuel was mixed more than a month ago');
+  await air.scrollIntoViewIfNeeded();
+  await snap(page, `${tag}-02-ranking`);
+}
+
 describe('the guided walk-through in the browser', () => {
   const baseUrl = inject('baseUrl');
   let browser: Browser;
@@ -256,6 +301,22 @@ describe('the guided walk-through in the browser', () => {
       await snap(page, 'diagnosis-desktop-08-stop');
     } finally {
       await context.close();
+    }
+  });
+
+  it("today's air and the fuel age, on a phone and at desktop width, show in the ranking's reasons", async () => {
+    for (const [viewport, tag] of [
+      [PHONE, 'diagnosis-air-phone'],
+      [DESKTOP, 'diagnosis-air-desktop'],
+    ] as const) {
+      const { context, page } = await newPage(browser, viewport, 'light');
+      const outside = recordOutsideRequests(page, baseUrl);
+      try {
+        await airAndFuel(page, baseUrl, tag);
+        expect(outside).toEqual([]);
+      } finally {
+        await context.close();
+      }
     }
   });
 

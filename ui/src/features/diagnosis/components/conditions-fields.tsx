@@ -186,7 +186,7 @@ export function ConditionsFields({
 
       <details className="fw-diag-air-units">
         <summary>
-          Units: {UNIT_SYMBOLS[units.temperature]}, {UNIT_SYMBOLS[units.pressure]}, {UNIT_SYMBOLS[units.length]}
+          Units: {UNIT_SYMBOLS[units.temperature]}, {UNIT_SYMBOLS[units.pressure]}, {UNIT_SYMBOLS[units.length]} (change)
         </summary>
         <UnitsControl idPrefix="intake-units" units={units} onChange={setUnits} />
         {saveError && <p className="fw-field-error">Your units could not be saved: {saveError.message}</p>}

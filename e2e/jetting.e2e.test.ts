@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { computeAir, suggestJets } from '@fuelwright/shared';
-import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap } from './browser.js';
+import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap, snapPart, snapTop } from './browser.js';
 
 const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
 
@@ -20,12 +20,38 @@ async function signIn(page: Page, baseUrl: string): Promise<void> {
   await page.waitForURL(`${baseUrl}/home`);
 }
 
+/** Neither the page nor the jetting log scrolls sideways. */
+async function expectNoSidewaysScroll(page: Page): Promise<void> {
+  const overflow = await page.evaluate(() => {
+    const root = document.documentElement;
+    const log = document.querySelector('[aria-label="Jetting log"]')?.parentElement;
+    return { page: root.scrollWidth - root.clientWidth, log: log ? log.scrollWidth - log.clientWidth : -1 };
+  });
+  expect(overflow.page).toBeLessThanOrEqual(0);
+  expect(overflow.log).toBeGreaterThanOrEqual(-1);
+  expect(overflow.log).toBeLessThanOrEqual(0);
+}
+
 async function logSession(
   page: Page,
-  s: { day: string; temperature: string; humidity: string; pressure: string; main: string; pilot: string; ran: 'Rich' | 'Right' | 'Lean'; plug: string; lap?: string; snapAs?: string },
+  s: {
+    day: string;
+    temperature: string;
+    humidity: string;
+    pressure: string;
+    main: string;
+    pilot: string;
+    ran: 'Rich' | 'Right' | 'Lean';
+    plug: string;
+    lap?: string;
+    /** The id of the setup to pick; without it the form's default (the kart's latest setup) stays. */
+    setupId?: string;
+    snapAs?: string;
+  },
 ): Promise<void> {
   await page.getByRole('button', { name: 'Log a session' }).click();
   const form = page.getByRole('form', { name: 'Log a session' });
+  if (s.setupId) await form.locator('#log-setup').selectOption(s.setupId);
   await form.locator('#log-date').fill(s.day);
   await form.locator('#log-track').fill('Club circuit');
   await form.locator('#log-temperature').fill(s.temperature);
@@ -38,7 +64,7 @@ async function logSession(
   await form.getByRole('radio', { name: s.ran, exact: true }).click();
   await form.locator('#log-plug').selectOption(s.plug);
   if (s.lap) await form.locator('#log-lap').fill(s.lap);
-  if (s.snapAs) await snap(page, s.snapAs);
+  if (s.snapAs) await snapTop(page, s.snapAs);
   await form.getByRole('button', { name: 'Log session' }).click();
   await form.waitFor({ state: 'detached' });
 }
@@ -87,11 +113,53 @@ describe('jetting in the browser', () => {
     await enterTodaysWeather(page);
     await page.getByText('No baseline yet').waitFor();
 
-    // Two sessions (°F, inHg as the racer reads them).
+    // Two setup snapshots of this kart (invented demo values), recorded on the kart's page in real use.
+    const setupIds: string[] = [];
+    for (const setup of [
+      { takenOn: daysAgo(20), mainJet: 182.5, pilotJet: 37.5, needleClipGroove: 2 },
+      { takenOn: daysAgo(5), mainJet: 185, pilotJet: 37.5, needleClipGroove: 3 },
+    ]) {
+      const res = await page.request.post(`${baseUrl}/api/karts/${kartId}/setups`, { data: setup });
+      expect(res.status()).toBe(201);
+      setupIds.push((await res.json()).id);
+    }
+    const [olderSetup, latestSetup] = setupIds;
+    await page.reload();
+    await page.getByRole('heading', { name: /Jetting: Browser test kart/ }).waitFor();
+
+    // Two sessions (°F, inHg as the racer reads them): the first keeps the default setup (the latest),
+    // the second, a week before, picks the older one.
     await logSession(page, { day: daysAgo(1), temperature: '57.2', humidity: '60', pressure: '29.80', main: '185', pilot: '37.5', ran: 'Right', plug: 'tan', lap: '54.321' });
-    await logSession(page, { day: daysAgo(8), temperature: '78.8', humidity: '40', pressure: '29.53', main: '182.5', pilot: '37.5', ran: 'Right', plug: 'light-tan', snapAs: 'jetting-log-form-phone' });
+    await page.getByRole('button', { name: 'Log a session' }).click();
+    const setupSelect = page.getByRole('form', { name: 'Log a session' }).locator('#log-setup');
+    expect(await setupSelect.inputValue()).toBe(latestSetup);
+    const setupOptions = await setupSelect.locator('option').allTextContents();
+    expect(setupOptions[0]).toBe('None');
+    expect(setupOptions[1]).toMatch(/: main jet 185, clip groove 3 from top \(latest\)$/);
+    expect(setupOptions[2]).toMatch(/: main jet 182\.5, clip groove 2 from top$/);
+    const [latestDay, olderDay] = [setupOptions[1], setupOptions[2]].map((o) => o.split(':')[0]);
+    await page.getByRole('form', { name: 'Log a session' }).getByRole('button', { name: 'Cancel' }).click();
+    await logSession(page, {
+      day: daysAgo(8),
+      temperature: '78.8',
+      humidity: '40',
+      pressure: '29.53',
+      main: '182.5',
+      pilot: '37.5',
+      ran: 'Right',
+      plug: 'light-tan',
+      setupId: olderSetup,
+      snapAs: 'jetting-log-form-phone',
+    });
     const rows = page.getByRole('table', { name: 'Jetting log' }).locator('tbody tr');
     await expect.poll(() => rows.count()).toBe(2);
+    // Each row says which setup it ran (on a phone: a line under the day, linking to the kart's page).
+    await rows.nth(0).getByRole('link', { name: `Setup of ${latestDay}: main jet 185, clip groove 3 from top` }).waitFor();
+    await rows.nth(1).getByRole('link', { name: `Setup of ${olderDay}: main jet 182.5, clip groove 2 from top` }).waitFor();
+    expect(await rows.nth(1).getByRole('link').getAttribute('href')).toBe(`/karts/${kartId}`);
+    await expectNoSidewaysScroll(page);
+    const logged = (await (await page.request.get(`${baseUrl}/api/karts/${kartId}/sessions`)).json()).sessions;
+    expect(logged.map((x: { setupId: string | null }) => x.setupId)).toEqual([latestSetup, olderSetup]);
 
     await enterTodaysWeather(page);
     const result = page.getByRole('region', { name: 'Today’s suggestion' });
@@ -139,7 +207,17 @@ describe('jetting in the browser', () => {
     await enterTodaysWeather(page);
     await page.getByRole('region', { name: 'Today’s suggestion' }).waitFor();
     await page.locator('.fw-jet-chart .recharts-line').waitFor();
+    // At desktop width the log has a "Setup used" column with the date and the main jet and clip.
+    const log = page.getByRole('table', { name: 'Jetting log' });
+    await log.getByRole('columnheader', { name: 'Setup used' }).waitFor();
+    expect(await log.locator('tbody tr').nth(1).textContent()).toContain('main jet 182.5, clip groove 2 from top');
+    await expectNoSidewaysScroll(page);
     await snap(page, 'jetting-desktop');
+    await page.getByRole('button', { name: 'Log a session' }).click();
+    const form = page.getByRole('form', { name: 'Log a session' });
+    expect(await form.locator('#log-setup option:checked').textContent()).toMatch(/main jet 185, clip groove 3 from top \(latest\)$/);
+    await snapPart(form, 'jetting-log-form-desktop');
+    await form.getByRole('button', { name: 'Cancel' }).click();
     await page.getByText('Jet kit', { exact: true }).click();
     await page.getByRole('form', { name: 'Jet kit' }).waitFor();
     await page.getByRole('form', { name: 'Jet kit' }).scrollIntoViewIfNeeded();

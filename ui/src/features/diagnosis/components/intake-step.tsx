@@ -193,7 +193,10 @@ export function IntakeStep({
       )}
 
       {caseOpen ? (
-        <p className="fw-muted">The setup and the day's air stay as recorded when the case was opened; only the symptoms change here.</p>
+        <p className="fw-muted">
+          Only the symptoms change here. To correct the setup or the day's air, use “Correct the setup or today's air” on the
+          causes screen.
+        </p>
       ) : (
         (!isCase || ctx.kartId) && (
           <>

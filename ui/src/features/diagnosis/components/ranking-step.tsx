@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, FormGroup, H2, TextArea } from '@blueprintjs/core';
-import { ArrowLeftIcon, DisableIcon, EditIcon, FlagIcon, PlayIcon, TickCircleIcon } from '@blueprintjs/icons';
+import { ArrowLeftIcon, CogIcon, DisableIcon, EditIcon, FlagIcon, PlayIcon, TickCircleIcon } from '@blueprintjs/icons';
 import { CASE_NOTE_MAX_LENGTH, CHECK_RESULT_LABELS } from '@fuelwright/shared';
 import type { WalkThroughSend, WalkThroughSnapshot } from '../hooks/use-walk-through';
 import { orderedPlan, previousCheckId } from '../machines/walk-through-model';
@@ -117,6 +117,16 @@ export function RankingStep({ snapshot, send, lookup }: { snapshot: WalkThroughS
           />
         )}
         <Button className="fw-touch" size="large" variant="minimal" icon={<EditIcon />} text="Change the symptoms" onClick={() => send({ type: 'INTAKE.EDIT' })} />
+        {ctx.mode === 'case' && ctx.caseId && ctx.caseState === 'open' && (
+          <Button
+            className="fw-touch"
+            size="large"
+            variant="minimal"
+            icon={<CogIcon />}
+            text="Correct the setup or today's air"
+            onClick={() => send({ type: 'FACTS.EDIT' })}
+          />
+        )}
         {ctx.mode === 'quick' ? (
           <Button className="fw-touch" size="large" variant="minimal" text="Finish without a fix" onClick={() => send({ type: 'FINISH' })} />
         ) : (

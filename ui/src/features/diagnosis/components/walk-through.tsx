@@ -6,6 +6,7 @@ import { PageSpinner } from '../../../components/page-spinner';
 import { useWalkThrough, type UseWalkThroughOptions, type WalkThroughSnapshot } from '../hooks/use-walk-through';
 import { catalogLookup } from './catalog-lookup';
 import { CheckStep } from './check-step';
+import { CorrectFactsStep } from './correct-facts-step';
 import { GeneralCaution } from './general-caution';
 import { IntakeStep } from './intake-step';
 import { RankingStep } from './ranking-step';
@@ -14,10 +15,10 @@ import { StopCallout } from './stop-callout';
 import { SummaryStep } from './summary-step';
 import '../diagnosis.css';
 
-export type Screen = 'loading' | 'failed' | 'intake' | 'ranking' | 'check' | 'resolve' | 'stopped' | 'summary';
+export type Screen = 'loading' | 'failed' | 'intake' | 'ranking' | 'correcting' | 'check' | 'resolve' | 'stopped' | 'summary';
 
 export function screenOf(snapshot: WalkThroughSnapshot): Screen {
-  for (const screen of ['failed', 'intake', 'ranking', 'check', 'resolve', 'stopped', 'summary'] as const) {
+  for (const screen of ['failed', 'intake', 'ranking', 'correcting', 'check', 'resolve', 'stopped', 'summary'] as const) {
     if (snapshot.matches(screen)) return screen;
   }
   return 'loading';
@@ -32,6 +33,7 @@ const STAGES = [
 
 function stageOf(screen: Screen): (typeof STAGES)[number]['id'] | null {
   if (screen === 'intake' || screen === 'ranking' || screen === 'check') return screen;
+  if (screen === 'correcting') return 'ranking';
   if (screen === 'resolve' || screen === 'stopped' || screen === 'summary') return 'end';
   return null;
 }
@@ -126,6 +128,9 @@ export function WalkThrough({
       break;
     case 'ranking':
       body = <RankingStep snapshot={snapshot} send={send} lookup={lookup} />;
+      break;
+    case 'correcting':
+      body = <CorrectFactsStep snapshot={snapshot} send={send} />;
       break;
     case 'check':
       body = <CheckStep key={ctx.currentCheckId ?? ''} snapshot={snapshot} send={send} lookup={lookup} />;

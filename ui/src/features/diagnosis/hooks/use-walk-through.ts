@@ -4,6 +4,7 @@ import { useActorRef, useSelector } from '@xstate/react';
 import { createActor, fromPromise, type Snapshot } from 'xstate';
 import type {
   CaseDto,
+  CorrectCaseFactsRequest,
   OpenCaseRequest,
   RankRequest,
   RankResponse,
@@ -13,6 +14,7 @@ import type {
   SymptomReport,
 } from '@fuelwright/shared';
 import { abandonCase } from '../api/abandon-case';
+import { correctCaseFacts } from '../api/correct-case-facts';
 import { getCaseQueryOptions } from '../api/get-case';
 import { getKartSetupsQueryOptions } from '../api/get-kart-setups';
 import { openCase, storeCase } from '../api/open-case';
@@ -41,6 +43,9 @@ export function walkThroughWithApi(queryClient: QueryClient) {
       loadCase: fromPromise<CaseDto, CaseRef>(({ input }) => queryClient.fetchQuery({ ...getCaseQueryOptions(input.caseId), staleTime: 0 })),
       reportSymptoms: fromPromise<CaseDto, CaseRef & { symptoms: SymptomReport[] }>(({ input }) =>
         changed(reportSymptoms(input.caseId, { symptoms: input.symptoms })),
+      ),
+      correctFacts: fromPromise<CaseDto, CaseRef & CorrectCaseFactsRequest>(({ input: { caseId, ...request } }) =>
+        changed(correctCaseFacts(caseId, request)),
       ),
       recordResult: fromPromise<CaseDto, CaseRef & RecordCheckResultRequest>(({ input: { caseId, ...request } }) =>
         changed(recordCheckResult(caseId, request)),

@@ -40,8 +40,19 @@ export function loadWalkThrough(key: string): Stored['snapshot'] | null {
     if (stored.v !== WALK_THROUGH_STORAGE_VERSION || !snapshot || snapshot.status !== 'active') return null;
     const context = snapshot.context as Partial<WalkThroughContext> | undefined;
     if (!context || (context.mode !== 'quick' && context.mode !== 'case') || !Array.isArray(context.results)) return null;
-    // Stored before the intake took the day's air and fuel: the same snapshot with nothing typed there.
-    if (!context.conditionsDraft) return { ...snapshot, context: { ...(context as WalkThroughContext), conditionsDraft: emptyConditionsDraft() } };
+    // Stored before the intake took the day's air and fuel, or before an open case's facts could be
+    // corrected: the same snapshot with nothing typed there (reconciling reads the case's conditions).
+    if (!context.conditionsDraft || !context.caseConditions || context.correction === undefined) {
+      return {
+        ...snapshot,
+        context: {
+          ...(context as WalkThroughContext),
+          conditionsDraft: context.conditionsDraft ?? emptyConditionsDraft(),
+          caseConditions: context.caseConditions ?? {},
+          correction: context.correction ?? null,
+        },
+      };
+    }
     return snapshot;
   } catch {
     return null;

@@ -188,3 +188,64 @@ export function conditionsDraftEntered(draft: ConditionsDraft): boolean {
   const typed = (v: AirFormValues) => [v.temperature, v.humidity, v.stationPressure, v.elevation, v.seaLevelPressure].some((t) => t.trim() !== '');
   return typed(draft.today) || typed(draft.reference) || draft.fuelAgeDays.trim() !== '';
 }
+
+// ---------------------------------------------------------------------------------------------
+// An open case's conditions, back into a draft (correcting the case's facts)
+// ---------------------------------------------------------------------------------------------
+
+/** A figure as draft text: two decimals at most, so the round trip through the text stays within typing precision. */
+const figureText = (value: number | undefined): string => (value === undefined ? '' : String(Math.round(value * 100) / 100));
+
+function dayDraft(figures: AirFigures | undefined): AirFormValues {
+  return {
+    ...EMPTY_AIR_FORM,
+    temperature: figureText(figures?.temperatureC),
+    humidity: figureText(figures?.relativeHumidityPct),
+    stationPressure: figureText(figures?.stationPressureHpa),
+  };
+}
+
+/**
+ * The conditions a case holds, as a draft in °C, hPa and m (the fields re-express it in the viewer's
+ * units). The reference day is given as typed figures: the case keeps figures, not where they came from.
+ */
+export function draftFromConditions(conditions: DiagnosisConditions | null | undefined): ConditionsDraft {
+  const draft = emptyConditionsDraft();
+  if (!conditions) return draft;
+  draft.today = dayDraft(conditions.today);
+  draft.reference = dayDraft(conditions.reference);
+  draft.fuelAgeDays = conditions.fuelAgeDays === undefined ? '' : String(conditions.fuelAgeDays);
+  return draft;
+}
+
+/** How far a figure may move through the text and a change of units and still be "as it was". */
+const FIGURE_TOLERANCE: Record<'temperatureC' | 'stationPressureHpa' | 'relativeHumidityPct', number> = {
+  temperatureC: 0.05,
+  stationPressureHpa: 0.05,
+  relativeHumidityPct: 0.05,
+};
+
+function sameFigures(a: AirFigures | undefined, b: AirFigures | undefined): boolean {
+  return (Object.keys(FIGURE_TOLERANCE) as (keyof typeof FIGURE_TOLERANCE)[]).every((field) => {
+    const x = a?.[field];
+    const y = b?.[field];
+    return x === undefined || y === undefined ? x === y : Math.abs(x - y) <= FIGURE_TOLERANCE[field];
+  });
+}
+
+/**
+ * The conditions to send with a correction, or undefined when the draft still says what the case
+ * holds (so correcting only the setup leaves the day's air exactly as recorded). A change in density
+ * the case holds without both days' figures (given directly, or worked out by the server from the
+ * kart's jetting log) is kept while neither day's figures change.
+ */
+export function correctedConditions(draft: ConditionsDraft, recorded: DiagnosisConditions | null | undefined): DiagnosisConditions | undefined {
+  const was = recorded ?? {};
+  const now = parseConditionsDraft(draft).conditions ?? {};
+  const daysSame = sameFigures(now.today, was.today) && sameFigures(now.reference, was.reference);
+  if (daysSame && now.fuelAgeDays === was.fuelAgeDays) return undefined;
+  if (daysSame && now.densityChangePct === undefined && was.densityChangePct !== undefined) {
+    return { ...now, densityChangePct: was.densityChangePct };
+  }
+  return now;
+}

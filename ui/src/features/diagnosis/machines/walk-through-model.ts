@@ -245,6 +245,7 @@ export function fromCase(dto: CaseDto) {
     symptoms: dto.symptoms,
     carburettorKind: (carburettorKind ?? null) as CarburettorKind | null,
     setupDraft: draftFromSetup(values),
+    caseConditions: dto.conditions ?? {},
     rank: dto.rank,
     results: dto.results.map((r) => ({ checkId: r.checkId, result: r.result, note: r.note })),
     resolution: dto.resolution ? { causeId: dto.resolution.causeId, fix: dto.resolution.fix, note: dto.resolution.note } : null,

@@ -7,6 +7,8 @@
  *
  * intake -> ranking (causes and plan) -> check (cautions first, then steps; record a result)
  * -> ranking (re-ranked) -> ... -> resolve or stopped -> summary.
+ * Case mode, open case: from the ranking, the setup and the day's air may be corrected (PUT
+ * /api/cases/:id/facts), which ranks the case again with the results so far.
  * Back goes to the previous check (recording again replaces its result), Skip moves a check to
  * the end of the plan for now. All I/O is in the actors, which the page provides.
  */
@@ -16,6 +18,8 @@ import type {
   CaseDto,
   CaseState,
   CheckResultValue,
+  CorrectCaseFactsRequest,
+  DiagnosisConditions,
   OpenCaseRequest,
   RankRequest,
   RankResponse,
@@ -45,10 +49,22 @@ import {
   type WalkThroughError,
   type WalkThroughMode,
 } from './walk-through-model';
-import { emptyConditionsDraft, parseConditionsDraft, type ConditionsDraft } from './conditions-draft';
+import {
+  correctedConditions,
+  draftFromConditions,
+  emptyConditionsDraft,
+  parseConditionsDraft,
+  type ConditionsDraft,
+} from './conditions-draft';
 
 /** Where the walk-through was when it was last at rest: reconciling with the server returns there. */
-export type WalkThroughPlace = 'intake' | 'ranking' | 'check' | 'resolve';
+export type WalkThroughPlace = 'intake' | 'ranking' | 'check' | 'resolve' | 'correcting';
+
+/** Case mode: the setup and the day's air being corrected, as typed (prefilled from the case). */
+export interface FactsCorrection {
+  setupDraft: SetupDraft;
+  conditionsDraft: ConditionsDraft;
+}
 
 export interface WalkThroughInput {
   mode: WalkThroughMode;
@@ -76,6 +92,10 @@ export interface WalkThroughContext {
   setupTouched: boolean;
   /** Today's air, the reference day and the fuel age, as typed (see conditions-draft.ts). */
   conditionsDraft: ConditionsDraft;
+  /** Case mode: the day's air and fuel age the case holds now. */
+  caseConditions: DiagnosisConditions;
+  /** Case mode, open case: the correction of the setup and the day's air being typed, if any. */
+  correction: FactsCorrection | null;
   /** Messages found before sending (missing symptom, kart, setup values out of range), by field. */
   formErrors: Record<string, string>;
   // diagnosis
@@ -113,6 +133,11 @@ export type WalkThroughEvent =
   | { type: 'INTAKE.SUBMIT' }
   | { type: 'INTAKE.EDIT' }
   | { type: 'INTAKE.CANCEL' }
+  | { type: 'FACTS.EDIT' }
+  | { type: 'FACTS.SETUP'; field: SetupDraftField; value: string }
+  | { type: 'FACTS.CONDITIONS'; draft: ConditionsDraft }
+  | { type: 'FACTS.SUBMIT' }
+  | { type: 'FACTS.CANCEL' }
   | { type: 'CHECKS.START' }
   | { type: 'CAUTIONS.ACKNOWLEDGE' }
   | { type: 'CHECK.RECORD'; result: CheckResultValue; note?: string }
@@ -141,6 +166,7 @@ export const walkThroughActorNames = [
   'openCase',
   'loadCase',
   'reportSymptoms',
+  'correctFacts',
   'recordResult',
   'resolveCase',
   'abandonCase',
@@ -165,6 +191,8 @@ function emptyContext(input: WalkThroughInput): WalkThroughContext {
     setupFrom: null,
     setupTouched: false,
     conditionsDraft: emptyConditionsDraft(),
+    caseConditions: {},
+    correction: null,
     formErrors: {},
     cautionCheckIds: [...input.cautionCheckIds],
     rank: null,
@@ -201,6 +229,29 @@ export function intakeErrors(context: WalkThroughContext): Record<string, string
     Object.assign(errors, parseConditionsDraft(context.conditionsDraft).errors);
   }
   return errors;
+}
+
+/** What cannot be read in the correction of an open case's setup and day's air, by request field. */
+export function correctionErrors(correction: FactsCorrection | null): Record<string, string> {
+  if (!correction) return {};
+  const errors: Record<string, string> = {};
+  for (const [field, message] of Object.entries(parseSetupDraft(correction.setupDraft).errors)) {
+    errors[`setup.${field}`] = message;
+  }
+  return { ...errors, ...parseConditionsDraft(correction.conditionsDraft).errors };
+}
+
+/**
+ * The correction as PUT /api/cases/:id/facts takes it: always the setup (it reads back exactly as
+ * the case holds it), and the conditions only when they differ from the case's.
+ */
+export function correctionRequest(context: WalkThroughContext): CorrectCaseFactsRequest {
+  const correction = context.correction!;
+  const conditions = correctedConditions(correction.conditionsDraft, context.caseConditions);
+  return {
+    setup: { ...parseSetupDraft(correction.setupDraft).setup, ...(context.carburettorKind ? { carburettorKind: context.carburettorKind } : {}) },
+    ...(conditions ? { conditions } : {}),
+  };
 }
 
 function rankRequest(context: WalkThroughContext, results: RecordedResult[]): RankRequest {
@@ -247,6 +298,7 @@ export const walkThroughMachine = setup({
     openCase: fromPromise<CaseDto, OpenCaseRequest>(async () => notProvided('openCase')),
     loadCase: fromPromise<CaseDto, CaseRef>(async () => notProvided('loadCase')),
     reportSymptoms: fromPromise<CaseDto, CaseRef & { symptoms: SymptomReport[] }>(async () => notProvided('reportSymptoms')),
+    correctFacts: fromPromise<CaseDto, CaseRef & CorrectCaseFactsRequest>(async () => notProvided('correctFacts')),
     recordResult: fromPromise<CaseDto, CaseRef & RecordCheckResultRequest>(async () => notProvided('recordResult')),
     resolveCase: fromPromise<CaseDto, CaseRef & ResolveCaseRequest>(async () => notProvided('resolveCase')),
     abandonCase: fromPromise<CaseDto, CaseRef & { reason?: string }>(async () => notProvided('abandonCase')),
@@ -256,6 +308,8 @@ export const walkThroughMachine = setup({
     isCase: ({ context }) => context.mode === 'case',
     isOpenCase: ({ context }) => context.mode === 'case' && context.caseId !== null,
     isNewCase: ({ context }) => context.mode === 'case' && context.caseId === null,
+    canCorrectFacts: ({ context }) => context.mode === 'case' && context.caseId !== null && context.caseState === 'open',
+    correctionInvalid: ({ context }) => Object.keys(correctionErrors(context.correction)).length > 0,
     hasRank: ({ context }) => context.rank !== null,
     intakeInvalid: ({ context }) => Object.keys(intakeErrors(context)).length > 0,
     hasNextCheck: ({ context }) => nextCheckId(context.rank, context.skipped) !== null,
@@ -284,6 +338,7 @@ export const walkThroughMachine = setup({
     },
     placeIsResolve: ({ context }) => context.place === 'resolve',
     placeIsIntake: ({ context }) => context.place === 'intake',
+    placeIsCorrecting: ({ context }) => context.place === 'correcting' && context.correction !== null,
     isConflict: ({ event }) => errorOf(event).status === 409,
   },
   actions: {
@@ -314,6 +369,17 @@ export const walkThroughMachine = setup({
         lastRecorded: context.pending,
         skipped: context.skipped.filter((id) => !recorded.has(id)),
         pending: null,
+        error: null,
+        formErrors: {},
+      };
+    }),
+    commitCorrection: assign(({ context, event }) => {
+      const facts = fromCase(caseOutput(event));
+      return {
+        ...facts,
+        previousCauses: topCauses(context.rank),
+        lastRecorded: null,
+        correction: null,
         error: null,
         formErrors: {},
       };
@@ -356,6 +422,8 @@ export const walkThroughMachine = setup({
           { guard: 'placeStillCheck', target: 'check', actions: 'applyCase' },
           { guard: 'placeIsResolve', target: 'resolve', actions: 'applyCase' },
           { guard: 'placeIsIntake', target: 'intake', actions: 'applyCase' },
+          // A correction being typed stays as typed (the case's facts are read again beside it).
+          { guard: 'placeIsCorrecting', target: 'correcting', actions: 'applyCase' },
           { target: 'ranking', actions: 'applyCase' },
         ],
         onError: { target: 'failed', actions: 'setError' },
@@ -533,6 +601,16 @@ export const walkThroughMachine = setup({
               actions: assign({ currentCheckId: ({ context }) => nextCheckId(context.rank, context.skipped), error: null }),
             },
             'INTAKE.EDIT': { target: '#walkThrough.intake', actions: 'clearError' },
+            'FACTS.EDIT': {
+              guard: 'canCorrectFacts',
+              target: '#walkThrough.correcting',
+              actions: [
+                'clearError',
+                assign({
+                  correction: ({ context }) => ({ setupDraft: { ...context.setupDraft }, conditionsDraft: draftFromConditions(context.caseConditions) }),
+                }),
+              ],
+            },
             'RESOLVE.START': { target: '#walkThrough.resolve', actions: 'clearError' },
             // From the causes, Back opens the check recorded last.
             'CHECK.BACK': {
@@ -557,6 +635,62 @@ export const walkThroughMachine = setup({
             onError: [
               { guard: 'isConflict', target: '#walkThrough.syncing', actions: 'noteConflict' },
               { target: 'idle', actions: 'setError' },
+            ],
+          },
+        },
+      },
+    },
+
+    /** Case mode, open case: correct the setup and the day's air; PUT /api/cases/:id/facts ranks it again. */
+    correcting: {
+      entry: assign({ place: 'correcting' }),
+      initial: 'editing',
+      on: {
+        'FACTS.SETUP': {
+          actions: assign({
+            correction: ({ context, event }) =>
+              context.correction && { ...context.correction, setupDraft: { ...context.correction.setupDraft, [event.field]: event.value } },
+            formErrors: ({ context, event }) => without(context.formErrors, `setup.${event.field}`),
+          }),
+        },
+        'FACTS.CONDITIONS': {
+          actions: assign({
+            correction: ({ context, event }) => context.correction && { ...context.correction, conditionsDraft: event.draft },
+            // As in the intake: a message goes once its field reads right.
+            formErrors: ({ context, event }) => {
+              const still = parseConditionsDraft(event.draft).errors;
+              return Object.fromEntries(
+                Object.entries(context.formErrors)
+                  .filter(([key]) => !key.startsWith('conditions.') || key in still)
+                  .map(([key, message]) => [key, key.startsWith('conditions.') ? still[key] : message]),
+              );
+            },
+          }),
+        },
+      },
+      states: {
+        editing: {
+          on: {
+            'FACTS.SUBMIT': [
+              { guard: 'correctionInvalid', actions: assign({ formErrors: ({ context }) => correctionErrors(context.correction), error: null }) },
+              { target: 'saving', actions: 'clearError' },
+            ],
+            'FACTS.CANCEL': { target: '#walkThrough.ranking', actions: ['clearError', assign({ correction: null })] },
+          },
+        },
+        saving: {
+          tags: 'busy',
+          invoke: {
+            src: 'correctFacts',
+            input: ({ context }) => ({ caseId: context.caseId!, ...correctionRequest(context) }),
+            onDone: [
+              { guard: 'caseStopped', target: '#walkThrough.stopped', actions: 'commitCorrection' },
+              { target: '#walkThrough.ranking', actions: 'commitCorrection' },
+            ],
+            onError: [
+              { guard: 'isConflict', target: '#walkThrough.syncing', actions: ['noteConflict', assign({ correction: null })] },
+              // The typed correction stays; a 400's messages go under their fields.
+              { target: 'editing', actions: 'setError' },
             ],
           },
         },

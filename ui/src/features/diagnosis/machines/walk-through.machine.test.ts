@@ -8,6 +8,7 @@ import { createActor, fromPromise, waitFor, type Snapshot } from 'xstate';
 import type {
   CaseDto,
   CheckResultValue,
+  CorrectCaseFactsRequest,
   OpenCaseRequest,
   PlanStep,
   RankRequest,
@@ -150,6 +151,19 @@ class FakeCaseServer {
     return structuredClone(c);
   }
 
+  /** PUT /api/cases/:id/facts: each part given replaces the case's (the kind stays the kart's); ranked again. */
+  correct(input: { caseId: string } & CorrectCaseFactsRequest): CaseDto {
+    this.calls.push({ name: 'correctFacts', input });
+    const c = this.mustBeOpen(input.caseId);
+    if (input.setup) c.setup = { ...input.setup, carburettorKind: c.setup.carburettorKind };
+    if (input.conditions) c.conditions = input.conditions;
+    // The fake ranking: a main jet of 200 or more makes cause-y the likelier (plumbing, not a trade fact).
+    const rank = fakeRank(Object.fromEntries(c.results.map((r) => [r.checkId, r.result])));
+    if ((c.setup.mainJet ?? 0) >= 200) rank.causes = rank.causes.map((cause) => ({ ...cause, probability: cause.id === 'cause-y' ? 0.6 : 0.1 }));
+    c.rank = rank;
+    return structuredClone(c);
+  }
+
   resolve(input: { caseId: string } & ResolveCaseRequest): CaseDto {
     this.calls.push({ name: 'resolveCase', input });
     const c = this.mustBeOpen(input.caseId);
@@ -183,7 +197,7 @@ interface Harness {
   rankRequests: RankRequest[];
   server: FakeCaseServer;
   /** Make the next call of this actor fail with this error. */
-  failNext: Partial<Record<'rank' | 'recordResult' | 'loadCase' | 'resolveCase', unknown>>;
+  failNext: Partial<Record<'rank' | 'recordResult' | 'loadCase' | 'resolveCase' | 'correctFacts', unknown>>;
 }
 
 function provided(h: Harness) {
@@ -208,6 +222,10 @@ function provided(h: Harness) {
         return h.server.load(input.caseId);
       }),
       reportSymptoms: fromPromise<CaseDto, { caseId: string; symptoms: SymptomReport[] }>(async ({ input }) => h.server.symptoms(input)),
+      correctFacts: fromPromise<CaseDto, { caseId: string } & CorrectCaseFactsRequest>(async ({ input }) => {
+        failing('correctFacts');
+        return h.server.correct(input);
+      }),
       recordResult: fromPromise<CaseDto, { caseId: string } & RecordCheckResultRequest>(async ({ input }) => {
         failing('recordResult');
         return h.server.record(input);
@@ -547,18 +565,19 @@ describe('walk-through machine, quick mode', () => {
   });
 });
 
+/** A new case on kart-1, opened from the intake, at the causes and plan. */
+async function caseAtRanking(h: Harness): Promise<Actor> {
+  const actor = start(h, { mode: 'case', kartId: null });
+  actor.send({ type: 'INTAKE.KART', kartId: 'kart-1', carburettorKind: 'pump-around', displacementCc: 125 });
+  await atRest(actor);
+  actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG] });
+  actor.send({ type: 'INTAKE.SUBMIT' });
+  await atRest(actor);
+  expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
+  return actor;
+}
+
 describe('walk-through machine, case mode', () => {
-  /** A new case on kart-1, opened from the intake, at the causes and plan. */
-  async function caseAtRanking(h: Harness): Promise<Actor> {
-    const actor = start(h, { mode: 'case', kartId: null });
-    actor.send({ type: 'INTAKE.KART', kartId: 'kart-1', carburettorKind: 'pump-around', displacementCc: 125 });
-    await atRest(actor);
-    actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG] });
-    actor.send({ type: 'INTAKE.SUBMIT' });
-    await atRest(actor);
-    expect(actor.getSnapshot().value).toEqual({ ranking: 'idle' });
-    return actor;
-  }
 
   it('intake: the kart is required, and its latest setup fills the setup (editable)', async () => {
     const h = harness();
@@ -862,5 +881,111 @@ describe("walk-through machine, the day's air and fuel", () => {
     const h = harness();
     await quickAtRanking(h);
     expect(h.rankRequests[0]).not.toHaveProperty('conditions');
+  });
+});
+
+describe("walk-through machine, correcting an open case's setup and the day's air", () => {
+  /** The figures are plumbing (what is sent and kept), not trade facts. */
+  const TODAY = { temperatureC: 12, relativeHumidityPct: 40, stationPressureHpa: 990 };
+
+  it('prefills from the case, sends the setup and only changed conditions, and takes the new ranking with the results kept', async () => {
+    const h = harness();
+    const actor = await caseAtRanking(h);
+    actor.send({ type: 'CHECKS.START' });
+    await record(actor, 'looks-fine');
+    h.server.cases.get('case-1')!.conditions = { today: TODAY, fuelAgeDays: 3 };
+    actor.send({ type: 'RECONCILE' });
+    await atRest(actor);
+
+    actor.send({ type: 'FACTS.EDIT' });
+    let snap = actor.getSnapshot();
+    expect(snap.value).toEqual({ correcting: 'editing' });
+    expect(snap.context.correction?.setupDraft).toEqual({ mainJet: '180' });
+    expect(snap.context.correction?.conditionsDraft.today).toMatchObject({ temperature: '12', humidity: '40', stationPressure: '990' });
+    expect(snap.context.correction?.conditionsDraft.fuelAgeDays).toBe('3');
+
+    // Only the main jet: the day's air is not sent, so it stays exactly as recorded.
+    actor.send({ type: 'FACTS.SETUP', field: 'mainJet', value: '205' });
+    actor.send({ type: 'FACTS.SUBMIT' });
+    await atRest(actor);
+    expect(h.server.calls.at(-1)).toEqual({
+      name: 'correctFacts',
+      input: { caseId: 'case-1', setup: { mainJet: 205, carburettorKind: 'pump-around' } },
+    });
+    snap = actor.getSnapshot();
+    expect(snap.value).toEqual({ ranking: 'idle' });
+    expect(snap.context.rank?.causes.find((c) => c.id === 'cause-y')?.probability).toBe(0.6);
+    expect(snap.context.previousCauses?.find((c) => c.id === 'cause-y')?.probability).toBe(0.3);
+    expect(snap.context.setupDraft.mainJet).toBe('205');
+    expect(snap.context.results).toHaveLength(1);
+    expect(snap.context.correction).toBeNull();
+
+    // Then the fuel age: the conditions go, today's air as the case had it.
+    actor.send({ type: 'FACTS.EDIT' });
+    const conditionsDraft = actor.getSnapshot().context.correction!.conditionsDraft;
+    actor.send({ type: 'FACTS.CONDITIONS', draft: { ...conditionsDraft, fuelAgeDays: '30' } });
+    actor.send({ type: 'FACTS.SUBMIT' });
+    await atRest(actor);
+    const sent = h.server.calls.at(-1)?.input as CorrectCaseFactsRequest;
+    expect(sent.conditions).toEqual({ today: expect.objectContaining(TODAY), fuelAgeDays: 30 });
+    expect(actor.getSnapshot().context.caseConditions.fuelAgeDays).toBe(30);
+  });
+
+  it('a value out of range is named before sending; a 400 keeps what was typed and shows the message under its field', async () => {
+    const h = harness();
+    const actor = await caseAtRanking(h);
+    actor.send({ type: 'FACTS.EDIT' });
+    actor.send({ type: 'FACTS.SETUP', field: 'mainJet', value: '5' });
+    actor.send({ type: 'FACTS.SUBMIT' });
+    expect(actor.getSnapshot().value).toEqual({ correcting: 'editing' });
+    expect(actor.getSnapshot().context.formErrors['setup.mainJet']).toMatch(/^Main jet: between/);
+    expect(h.server.calls.some((c) => c.name === 'correctFacts')).toBe(false);
+
+    actor.send({ type: 'FACTS.SETUP', field: 'mainJet', value: '190' });
+    expect(actor.getSnapshot().context.formErrors).toEqual({});
+    h.failNext.correctFacts = new ApiError(400, 'Invalid', { 'setup.mainJet': ['mainJet must be a jet size the ruleset knows'] });
+    actor.send({ type: 'FACTS.SUBMIT' });
+    await atRest(actor);
+    const snap = actor.getSnapshot();
+    expect(snap.value).toEqual({ correcting: 'editing' });
+    expect(snap.context.error?.fields).toEqual({ 'setup.mainJet': ['mainJet must be a jet size the ruleset knows'] });
+    expect(snap.context.correction?.setupDraft.mainJet).toBe('190');
+    expect(snap.context.setupDraft.mainJet).toBe('180');
+  });
+
+  it('a correction being typed survives a reload; cancel leaves the case as it was', async () => {
+    const h = harness();
+    const actor = await caseAtRanking(h);
+    actor.send({ type: 'FACTS.EDIT' });
+    actor.send({ type: 'FACTS.SETUP', field: 'pilotJet', value: '40' });
+    const stored = JSON.stringify(actor.getPersistedSnapshot());
+    actor.stop();
+
+    const again = restore(h, stored);
+    again.start();
+    again.send({ type: 'RECONCILE' });
+    await atRest(again);
+    expect(again.getSnapshot().value).toEqual({ correcting: 'editing' });
+    expect(again.getSnapshot().context.correction?.setupDraft.pilotJet).toBe('40');
+
+    again.send({ type: 'FACTS.CANCEL' });
+    expect(again.getSnapshot().value).toEqual({ ranking: 'idle' });
+    expect(again.getSnapshot().context.correction).toBeNull();
+    expect(h.server.calls.some((c) => c.name === 'correctFacts')).toBe(false);
+  });
+
+  it('not offered in quick mode, nor on a finished case; a 409 reloads the case', async () => {
+    const h = harness();
+    const quick = await quickAtRanking(h);
+    quick.send({ type: 'FACTS.EDIT' });
+    expect(quick.getSnapshot().value).toEqual({ ranking: 'idle' });
+
+    const actor = await caseAtRanking(h);
+    actor.send({ type: 'FACTS.EDIT' });
+    h.server.abandon({ caseId: 'case-1' });
+    actor.send({ type: 'FACTS.SUBMIT' });
+    await atRest(actor);
+    expect(actor.getSnapshot().value).toBe('summary');
+    expect(actor.getSnapshot().context.notice).toMatch(/changed elsewhere/);
   });
 });

@@ -329,3 +329,56 @@ describe('a case’s walk-through', () => {
     again.stop();
   });
 });
+
+describe('correcting an open case’s setup and the day’s air', () => {
+  it('prefills from the case, names a bad main jet before sending, shows a 400 under its field with the value kept, then ranks again', async () => {
+    const opened: CaseDto = { ...CASE, setup: { carburettorKind: 'pump-around', mainJet: 180 }, conditions: { fuelAgeDays: 3 } };
+    const sent: unknown[] = [];
+    let answer400 = true;
+    mockApi({
+      'GET /auth/me': meReply(RACER),
+      'GET /catalog': { status: 200, body: CATALOG },
+      'GET /karts/k1/sessions': { status: 200, body: { sessions: [] } },
+      'GET /me/preferences': { status: 200, body: { units: { temperature: 'C', pressure: 'hPa', length: 'm' } } },
+      'GET /cases/c1': { status: 200, body: opened },
+      'PUT /cases/c1/facts': (init) => {
+        const body = JSON.parse(String(init.body)) as { setup: CaseDto['setup'] };
+        sent.push(body);
+        if (answer400) {
+          answer400 = false;
+          return { status: 400, body: { statusCode: 400, error: 'Bad Request', message: 'Some details were not accepted', fields: { 'setup.mainJet': ['mainJet is not a size this ruleset knows'] } } };
+        }
+        const rank = rankReply();
+        rank.causes = rank.causes.map((c) => ({ ...c, probability: c.id === 'cause-y' ? 0.7 : 0.2 }));
+        return { status: 200, body: { ...opened, setup: { ...body.setup, carburettorKind: 'pump-around' }, rank } };
+      },
+    });
+    const user = userEvent.setup();
+    renderApp('/cases/c1/walk-through');
+    await user.click(await screen.findByRole('button', { name: "Correct the setup or today's air" }));
+
+    const mainJet = await screen.findByLabelText('Main jet');
+    expect(mainJet).toHaveValue('180');
+    // The day's air section opens on what the case holds.
+    expect(screen.getByLabelText('Days since the fuel was mixed')).toHaveValue('3');
+
+    await user.clear(mainJet);
+    await user.type(mainJet, '5');
+    await user.click(screen.getByRole('button', { name: 'Save and rank again' }));
+    expect(screen.getByText(/^Main jet: between/)).toBeInTheDocument();
+    expect(sent).toHaveLength(0);
+
+    await user.clear(mainJet);
+    await user.type(mainJet, '205');
+    await user.click(screen.getByRole('button', { name: 'Save and rank again' }));
+    expect(await screen.findByText('mainJet is not a size this ruleset knows')).toBeInTheDocument();
+    expect(screen.getByLabelText('Main jet')).toHaveValue('205');
+    // Only the setup changed: the day's air is not sent, so it stays as recorded.
+    expect(sent).toEqual([{ setup: { mainJet: 205, carburettorKind: 'pump-around' } }]);
+
+    await user.click(screen.getByRole('button', { name: 'Save and rank again' }));
+    const causes = await screen.findByRole('list', { name: /Likely causes/ });
+    expect(within(causes).getByText('70%')).toBeInTheDocument();
+    expect(sent).toHaveLength(2);
+  });
+});

@@ -1,7 +1,8 @@
 /**
  * The guided walk-through in a real browser: a visitor's quick diagnosis on a phone (cautions
  * first, two results, the ranking changes, leave and come back, a stop), saving it after sign-up,
- * and the demo racer's case on "Blue 27" from intake to resolved, found again in the case list.
+ * and the demo racer's case on "Blue 27" from intake to resolved (its main jet corrected on the way,
+ * seen in the case's timeline), found again in the case list.
  * Screenshots of every main screen at phone and desktop width go to screenshots/ (git-ignored).
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -365,7 +366,7 @@ describe('the guided walk-through in the browser', () => {
     }
   });
 
-  it('the demo racer opens a case on "Blue 27", records a result, resolves it and finds it in the case list', async () => {
+  it('the demo racer opens a case on "Blue 27", records a result, corrects the main jet, resolves it and finds it in the case list', async () => {
     const { context, page } = await newPage(browser, PHONE, 'light');
     try {
       await signInWithForm(page, baseUrl, RACER);
@@ -399,6 +400,37 @@ describe('the guided walk-through in the browser', () => {
       let dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.results.map((r) => [r.checkId, r.result, r.note])).toEqual([[checkId, 'looks-fine', 'checked twice']]);
 
+      // The main jet was entered wrong: correct it on the open case; the causes are ranked again
+      // with the result so far, and the case's timeline says so.
+      expect(dto.setup.mainJet).toBeTypeOf('number');
+      const jetBefore = dto.setup.mainJet!;
+      const jetAfter = jetBefore + 10;
+      await page.getByRole('button', { name: "Correct the setup or today's air" }).click();
+      await waitForScreen(page, 'correcting');
+      expect(await page.getByLabel('Main jet').inputValue()).toBe(String(jetBefore));
+      await page.getByLabel('Main jet').fill(String(jetAfter));
+      await snap(page, 'diagnosis-case-phone-02-correct-facts');
+      // Nothing wider than the phone: no sideways scroll on the correction form.
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+      await page.getByRole('button', { name: 'Save and rank again' }).click();
+      await waitForScreen(page, 'ranking');
+      dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
+      expect(dto.setup.mainJet).toBe(jetAfter);
+      expect(dto.events.at(-1)?.type).toBe('facts-corrected');
+      expect(dto.results.map((r) => r.checkId)).toEqual([checkId]);
+      // The causes shown are the new ranking's, in its order, with its figures.
+      const shown = await shownCauses(page);
+      expect([...shown.keys()].filter((id) => id !== 'something-else')).toEqual(dto.rank.causes.map((c) => c.id));
+      for (const cause of dto.rank.causes) expect(shown.get(cause.id)).toBeCloseTo(cause.probability, 4);
+      await snap(page, 'diagnosis-case-phone-03-reranked-after-correction');
+      await page.goto(`${baseUrl}/cases/${caseId}`);
+      const timeline = page.getByRole('list', { name: 'Timeline' });
+      await timeline.locator('[data-event-type="facts-corrected"]').waitFor(WAIT);
+      expect(await timeline.locator('[data-event-type="facts-corrected"]').textContent()).toContain(`Setup and air corrected (main jet ${jetAfter})`);
+      await snap(page, 'diagnosis-case-phone-04-timeline-corrected');
+      await page.goto(`${baseUrl}/cases/${caseId}/walk-through`);
+      await waitForScreen(page, 'ranking');
+
       await page.getByRole('button', { name: /say what fixed it/i }).click();
       await waitForScreen(page, 'resolve');
       const topCause = dto.rank.causes[0];
@@ -406,7 +438,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByLabel('What you did').fill('Cleaned and refitted it');
       await page.getByRole('button', { name: 'Save: fixed' }).click();
       await waitForScreen(page, 'summary');
-      await snap(page, 'diagnosis-case-phone-02-summary');
+      await snap(page, 'diagnosis-case-phone-05-summary');
       dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.state).toBe('resolved');
       expect(dto.resolution).toMatchObject({ causeId: topCause.id, fix: 'Cleaned and refitted it' });
@@ -419,7 +451,7 @@ describe('the guided walk-through in the browser', () => {
       const card = page.locator('.fw-case-card, tr').filter({ has: page.locator(`a[href$="/cases/${caseId}"]`) }).first();
       await expect.poll(() => card.innerText(), WAIT).toContain('Blue 27');
       await expect.poll(() => card.innerText(), WAIT).toContain('Resolved');
-      await snap(page, 'diagnosis-case-phone-03-case-list');
+      await snap(page, 'diagnosis-case-phone-06-case-list');
 
       // A finished case's walk-through opens on its summary; the server refuses further steps (409).
       await page.goto(`${baseUrl}/cases/${caseId}/walk-through`);

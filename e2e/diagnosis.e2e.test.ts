@@ -414,6 +414,7 @@ describe('the guided walk-through in the browser', () => {
       expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
       await page.getByRole('button', { name: 'Save and rank again' }).click();
       await waitForScreen(page, 'ranking');
+      await visible(page.getByText('Setup and air corrected', { exact: true }));
       dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.setup.mainJet).toBe(jetAfter);
       expect(dto.events.at(-1)?.type).toBe('facts-corrected');

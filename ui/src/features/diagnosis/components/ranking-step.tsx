@@ -74,6 +74,12 @@ export function RankingStep({ snapshot, send, lookup }: { snapshot: WalkThroughS
         </Callout>
       )}
 
+      {ctx.factsCorrected && !last && (
+        <Callout className="fw-diag-last" intent="primary" icon={<CogIcon />} title="Setup and air corrected">
+          The causes and the plan below are ranked again with the corrected facts and the checks done so far.
+        </Callout>
+      )}
+
       <div className="fw-diag-columns">
         <section className="fw-diag-section-plain" aria-labelledby="causes-title">
           <H2 id="causes-title" className="fw-diag-h2">

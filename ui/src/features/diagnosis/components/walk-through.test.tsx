@@ -379,6 +379,7 @@ describe('correcting an open case’s setup and the day’s air', () => {
     await user.click(screen.getByRole('button', { name: 'Save and rank again' }));
     const causes = await screen.findByRole('list', { name: /Likely causes/ });
     expect(within(causes).getByText('70%')).toBeInTheDocument();
+    expect(screen.getByText('Setup and air corrected')).toBeInTheDocument();
     expect(sent).toHaveLength(2);
   });
 });

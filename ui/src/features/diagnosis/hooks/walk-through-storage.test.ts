@@ -44,6 +44,17 @@ describe('walk-through storage', () => {
     expect(loaded?.context.conditionsDraft).toEqual(emptyConditionsDraft());
     expect(loaded?.context.carburettorKind).toBe('pump-around');
   });
+
+  it("gives a snapshot kept before an open case's facts could be corrected no correction and no conditions, the rest as it was", () => {
+    const persisted = quickActor().getPersistedSnapshot() as unknown as { context: Record<string, unknown> };
+    delete persisted.context.correction;
+    delete persisted.context.caseConditions;
+    localStorage.setItem(QUICK_DIAGNOSIS_KEY, JSON.stringify({ v: WALK_THROUGH_STORAGE_VERSION, snapshot: persisted }));
+    const loaded = loadWalkThrough(QUICK_DIAGNOSIS_KEY);
+    expect(loaded?.context.correction).toBeNull();
+    expect(loaded?.context.caseConditions).toEqual({});
+    expect(loaded?.context.carburettorKind).toBe('pump-around');
+  });
 });
 
 describe('saving a quick diagnosis as a case', () => {

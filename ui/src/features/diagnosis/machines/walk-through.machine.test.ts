@@ -919,6 +919,7 @@ describe("walk-through machine, correcting an open case's setup and the day's ai
     expect(snap.context.setupDraft.mainJet).toBe('205');
     expect(snap.context.results).toHaveLength(1);
     expect(snap.context.correction).toBeNull();
+    expect(snap.context.factsCorrected).toBe(true);
 
     // Then the fuel age: the conditions go, today's air as the case had it.
     actor.send({ type: 'FACTS.EDIT' });

@@ -105,6 +105,8 @@ export interface WalkThroughContext {
   previousCauses: CauseProbability[] | null;
   /** The result recorded by the last step (shown over the re-ranked causes). */
   lastRecorded: RecordedResult | null;
+  /** Case mode: the last step corrected the setup or the day's air (said over the re-ranked causes). */
+  factsCorrected: boolean;
   results: RecordedResult[];
   /** Checks skipped for now, in the order skipped: they go to the end of the plan. */
   skipped: string[];
@@ -198,6 +200,7 @@ function emptyContext(input: WalkThroughInput): WalkThroughContext {
     rank: null,
     previousCauses: null,
     lastRecorded: null,
+    factsCorrected: false,
     results: [],
     skipped: [],
     currentCheckId: null,
@@ -367,6 +370,7 @@ export const walkThroughMachine = setup({
         ...facts,
         previousCauses: topCauses(context.rank),
         lastRecorded: context.pending,
+        factsCorrected: false,
         skipped: context.skipped.filter((id) => !recorded.has(id)),
         pending: null,
         error: null,
@@ -379,6 +383,7 @@ export const walkThroughMachine = setup({
         ...facts,
         previousCauses: topCauses(context.rank),
         lastRecorded: null,
+        factsCorrected: true,
         correction: null,
         error: null,
         formErrors: {},
@@ -391,6 +396,7 @@ export const walkThroughMachine = setup({
         ...facts,
         // Checks recorded on the server are no longer "skipped for now".
         skipped: context.skipped.filter((id) => !recorded.has(id)),
+        factsCorrected: false,
         error: null,
         formErrors: {},
       };

@@ -680,6 +680,14 @@ describe('walk-through machine, case mode', () => {
     actor.send({ type: 'INTAKE.EDIT' });
     expect(actor.getSnapshot().value).toEqual({ intake: 'editing' });
     actor.send({ type: 'INTAKE.SYMPTOMS', symptoms: [BOG, { id: 'symptom-2' }] });
+    const before = actor.getSnapshot().context.rank!.causes.map((c) => ({ id: c.id, probability: c.probability }));
+    // The new symptom moves cause-x (plumbing for the test, not a trade fact).
+    const report = h.server.symptoms.bind(h.server);
+    h.server.symptoms = (input) => {
+      const dto = report(input);
+      dto.rank = { ...dto.rank, causes: dto.rank.causes.map((c) => (c.id === 'cause-x' ? { ...c, probability: 0.6 } : c)) };
+      return dto;
+    };
     actor.send({ type: 'INTAKE.SUBMIT' });
     await atRest(actor);
     expect(h.server.calls.at(-1)).toEqual({ name: 'reportSymptoms', input: { caseId: 'case-1', symptoms: [BOG, { id: 'symptom-2' }] } });
@@ -687,6 +695,9 @@ describe('walk-through machine, case mode', () => {
     expect(snap.value).toEqual({ ranking: 'idle' });
     expect(snap.context.symptoms).toHaveLength(2);
     expect(snap.context.results).toHaveLength(1);
+    // "What changed" compares with the ranking before the new symptoms, not with the new one.
+    expect(snap.context.previousCauses).toEqual(before);
+    expect(snap.context.rank!.causes.map((c) => c.probability)).not.toEqual(before.map((c) => c.probability));
   });
 
   it('abandon: the case is closed on the server and the summary shows', async () => {

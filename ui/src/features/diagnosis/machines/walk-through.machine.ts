@@ -583,7 +583,8 @@ export const walkThroughMachine = setup({
             input: ({ context }) => ({ caseId: context.caseId!, symptoms: symptomsForRequest(context.symptoms) }),
             onDone: {
               target: '#walkThrough.ranking',
-              actions: ['applyCase', assign({ previousCauses: ({ context }) => topCauses(context.rank), lastRecorded: null })],
+              // The causes before the change first: applyCase replaces the ranking (actions run in order).
+              actions: [assign({ previousCauses: ({ context }) => topCauses(context.rank), lastRecorded: null }), 'applyCase'],
             },
             onError: [
               { guard: 'isConflict', target: '#walkThrough.syncing', actions: 'noteConflict' },

@@ -1,11 +1,12 @@
 import { useCallback, useState, type FormEvent } from 'react';
-import { Button, Callout, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Section, SectionCard } from '@blueprintjs/core';
 import { RefreshIcon } from '@blueprintjs/icons';
 import type { WalkThroughSend, WalkThroughSnapshot } from '../hooks/use-walk-through';
 import { conditionsDraftEntered, type ConditionsDraft } from '../machines/conditions-draft';
 import type { SetupDraftField } from '../machines/walk-through-model';
 import { ConditionsFields } from './conditions-fields';
 import { SetupFields } from './setup-fields';
+import { StepErrors } from './step-errors';
 
 /** The request fields the air and fuel inputs stand for (a 400 on one of them shows under it). */
 const CONDITION_FIELD = /^conditions\.((today|reference)\.(temperatureC|relativeHumidityPct|stationPressureHpa)|fuelAgeDays|densityChangePct)$/;
@@ -40,20 +41,7 @@ export function CorrectFactsStep({ snapshot, send }: { snapshot: WalkThroughSnap
 
   return (
     <form className="fw-diag-step" onSubmit={submit} noValidate aria-label="Correct the setup or today's air">
-      {ctx.error && ctx.error.status !== 400 && (
-        <Callout intent="danger" role="alert" className="fw-form-error">
-          {ctx.error.message}
-        </Callout>
-      )}
-      {otherServerMessages.length > 0 && (
-        <Callout intent="danger" role="alert" className="fw-form-error" title="Some details were not accepted">
-          <ul className="fw-diag-plain-list">
-            {otherServerMessages.map((m) => (
-              <li key={m}>{m}</li>
-            ))}
-          </ul>
-        </Callout>
-      )}
+      <StepErrors error={ctx.error} otherMessages={otherServerMessages} />
       <p className="fw-muted">
         Put right what the case was opened with. The causes are ranked again with the checks done so far; the first ranking and
         this correction both stay in the case's timeline.

@@ -12,6 +12,7 @@ import { ConditionsFields } from './conditions-fields';
 import { KartFormInline } from './kart-form-inline';
 import { SetupFields } from './setup-fields';
 import { SymptomPicker } from './symptom-picker';
+import { StepErrors } from './step-errors';
 
 const KIND_HELP: Record<CarburettorKind, string> = {
   'pump-around':
@@ -88,20 +89,7 @@ export function IntakeStep({
 
   return (
     <form className="fw-diag-step" onSubmit={submit} noValidate aria-label="Symptoms and setup">
-      {ctx.error && ctx.error.status !== 400 && (
-        <Callout intent="danger" role="alert" className="fw-form-error">
-          {ctx.error.message}
-        </Callout>
-      )}
-      {otherServerMessages.length > 0 && (
-        <Callout intent="danger" role="alert" className="fw-form-error" title="Some details were not accepted">
-          <ul className="fw-diag-plain-list">
-            {otherServerMessages.map((m) => (
-              <li key={m}>{m}</li>
-            ))}
-          </ul>
-        </Callout>
-      )}
+      <StepErrors error={ctx.error} otherMessages={otherServerMessages} />
 
       {isCase && !caseOpen && (
         <Section className="fw-diag-section" title="Which kart?" compact>

@@ -46,6 +46,27 @@ export async function newPage(
   return { context, page };
 }
 
+/**
+ * Several pages on one browser, each in its own context, each recording any request that leaves
+ * the app; `close()` closes every context, `outside()` lists the requests that left.
+ */
+export function trackedPages(baseUrl: string) {
+  const contexts: BrowserContext[] = [];
+  const outside: string[][] = [];
+  return {
+    async open(browser: Browser, viewport: { width: number; height: number }, theme: 'dark' | 'light'): Promise<Page> {
+      const { context, page } = await newPage(browser, viewport, theme);
+      contexts.push(context);
+      outside.push(recordOutsideRequests(page, baseUrl));
+      return page;
+    },
+    outside: () => outside.flat(),
+    async close(): Promise<void> {
+      for (const context of contexts) await context.close();
+    },
+  };
+}
+
 /** Saves a screenshot under screenshots/ (git-ignored) for a person to look at. */
 export async function snap(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import type { Browser, Locator, Page } from 'playwright-core';
 import type { CatalogResponse } from '@fuelwright/shared';
-import { DESKTOP, PHONE, POLL, apiFromPage, launchChromium, newPage, recordOutsideRequests, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop } from './browser.js';
+import { DESKTOP, PHONE, POLL, apiFromPage, launchChromium, trackedPages, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop } from './browser.js';
 
 const RACER = 'racer@fuelwright.test';
 const SHOP = 'shop@fuelwright.test';
@@ -31,8 +31,6 @@ async function tickCause(form: Locator, label: RegExp): Promise<void> {
 describe('outcomes, insights and ruleset versions in the browser', () => {
   const baseUrl = inject('baseUrl');
   let browser: Browser;
-  const contexts: BrowserContext[] = [];
-  const outside: string[][] = [];
   let racer: Page; // phone, dark: the racer at the track
   let shop: Page; // phone, light: the shop at the bench
   let shopDesk: Page; // desktop, light: the shop's office
@@ -42,12 +40,8 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
   let proposalPath = '';
   let proposedVersion = '';
 
-  const open = async (viewport: typeof PHONE | typeof DESKTOP, theme: 'dark' | 'light') => {
-    const { context, page } = await newPage(browser, viewport, theme);
-    contexts.push(context);
-    outside.push(recordOutsideRequests(page, baseUrl));
-    return page;
-  };
+  const pages = trackedPages(baseUrl);
+  const open = (viewport: typeof PHONE | typeof DESKTOP, theme: 'dark' | 'light') => pages.open(browser, viewport, theme);
 
   beforeAll(async () => {
     browser = await launchChromium();
@@ -60,7 +54,7 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await signInQuietly(admin, baseUrl, ADMIN);
   });
   afterAll(async () => {
-    for (const context of contexts) await context.close();
+    await pages.close();
     await browser?.close();
   });
 
@@ -322,6 +316,6 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
   });
 
   it('fetched nothing from outside the app', () => {
-    expect(outside.flat()).toEqual([]);
+    expect(pages.outside()).toEqual([]);
   });
 });

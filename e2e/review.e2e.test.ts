@@ -1,7 +1,7 @@
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { DESKTOP, PHONE, POLL, apiFromPage, invitationPathIn, launchChromium, newPage, recordOutsideRequests, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop, waitForInvitation, waitForMail } from './browser.js';
+import type { Browser, Page } from 'playwright-core';
+import { DESKTOP, PHONE, POLL, apiFromPage, invitationPathIn, launchChromium, trackedPages, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop, waitForInvitation, waitForMail } from './browser.js';
 
 const RACER = 'racer@fuelwright.test';
 const RACER2 = 'racer2@fuelwright.test';
@@ -17,23 +17,17 @@ const STEP = 120_000;
 describe('remote review in the browser: share, accept, comment, recommend, photo, outbox', () => {
   const baseUrl = inject('baseUrl');
   let browser: Browser;
-  const contexts: BrowserContext[] = [];
   let racer: Page; // phone, dark theme: the racer at the track
   let racerDesk: Page;
   let coach: Page; // desktop, light theme: the coach at home
   let coachPhone: Page;
   let admin: Page;
-  const outside: string[][] = [];
   let caseId = '';
   let sharedAt = '';
   let recommendedLabel = '';
 
-  const open = async (viewport: typeof PHONE | typeof DESKTOP, theme: 'dark' | 'light') => {
-    const { context, page } = await newPage(browser, viewport, theme);
-    contexts.push(context);
-    outside.push(recordOutsideRequests(page, baseUrl));
-    return page;
-  };
+  const pages = trackedPages(baseUrl);
+  const open = (viewport: typeof PHONE | typeof DESKTOP, theme: 'dark' | 'light') => pages.open(browser, viewport, theme);
 
   beforeAll(async () => {
     browser = await launchChromium();
@@ -45,7 +39,7 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await signInQuietly(admin, baseUrl, ADMIN);
   });
   afterAll(async () => {
-    for (const context of contexts) await context.close();
+    await pages.close();
     await browser?.close();
   });
 
@@ -248,6 +242,6 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await notice.locator('pre').waitFor();
     await snapTop(adminPhone, 'review-outbox-phone');
 
-    expect(outside.flat()).toEqual([]);
+    expect(pages.outside()).toEqual([]);
   });
 });

@@ -125,7 +125,7 @@ describe('reading back outcomes, proposals and work orders', () => {
       // The figures are the ones the full proposal carries.
       for (const p of listed) {
         const full = (await shop.get(`/api/rulesets/proposals/${p.id}`)).body as ProposalDto;
-        const bt = (full.result as { backTest: { heldOut: number; scored: number; before: Record<string, number>; after: Record<string, number> } }).backTest;
+        const bt = full.result!.backTest;
         expect(p.backTest).toEqual({
           heldOut: bt.heldOut,
           scored: bt.scored,

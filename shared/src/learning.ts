@@ -95,7 +95,7 @@ export interface ProposalDto {
   createdAt: string;
   finishedAt: string | null;
   /** When ready: the diff (old, proposed, evidence) and the back-test, as computed by the rules package. */
-  result: unknown;
+  result: ProposalResult | null;
 }
 
 /** One ruleset's accuracy on a proposal's held-out outcomes (shares 0..1). */
@@ -120,3 +120,149 @@ export interface ProposalListResponse {
 }
 
 export const PROPOSAL_LIST_LIMIT = 50;
+
+/*
+ * The insight figures as GET /api/insights sends them (computed by the rules package's metric
+ * accumulators, rules/src/learning/metrics.ts, whose types the service checks against these). A
+ * figure that has no value (a mean over nothing) is NaN there and arrives as null.
+ */
+
+export interface RankingAccuracy {
+  ranked: number;
+  top1: number;
+  top3: number;
+  top1Rate: number;
+  top3Rate: number;
+  /** Mean multi-category Brier score, 0 (certain and right) to 2 (certain and wrong). */
+  brier: number | null;
+}
+
+export interface CalibrationBin {
+  from: number;
+  to: number;
+  count: number;
+  meanPredicted: number | null;
+  observed: number | null;
+}
+
+export interface Calibration {
+  bins: CalibrationBin[];
+  count: number;
+  expectedCalibrationError: number | null;
+}
+
+export interface SymptomCausePair {
+  symptom: string;
+  cause: string;
+  outcomes: number;
+  shareOfSymptom: number;
+}
+
+export interface LabourByCause {
+  cause: string;
+  outcomes: number;
+  meanMinutes: number;
+  sdMinutes: number | null;
+  minMinutes: number;
+  maxMinutes: number;
+}
+
+export interface WrongWayRule {
+  rule: string;
+  cause: string;
+  lr: number;
+  direction: 'for' | 'against';
+  fired: number;
+  wrongWay: number;
+  wrongWayRate: number;
+}
+
+export interface Insights {
+  rulesetVersion: string;
+  outcomes: number;
+  skipped: number;
+  withCase: number;
+  walkIns: number;
+  ranked: number;
+  accuracy: RankingAccuracy;
+  calibration: Calibration;
+  topLabelCalibration: Calibration;
+  symptomCausePairs: SymptomCausePair[];
+  labourByCause: LabourByCause[];
+  wrongWayRules: { rules: WrongWayRule[]; unknownRuleFirings: number };
+  confirmed: { cause: string; outcomes: number }[];
+  stillFixed: { yes: number; no: number; unknown: number };
+}
+
+export interface InsightsResponse {
+  version: string;
+  from: string | null;
+  to: string | null;
+  /** Cases opened in the period under this version. */
+  cases: number;
+  outcomes: number;
+  insights: Insights;
+}
+
+/*
+ * A ready proposal's `result`, as the rules package computes it (rules/src/learning/refine.ts),
+ * without the ruleset source, which the server keeps to publish.
+ */
+
+export interface Accuracy {
+  ranked: number;
+  top1: number;
+  top3: number;
+  top1Rate: number;
+  top3Rate: number;
+  brier: number | null;
+}
+
+export interface PriorChange {
+  cause: string;
+  old: number;
+  proposed: number;
+  changed: boolean;
+  evidence: {
+    outcomes: number;
+    weight: number;
+    imputed: number;
+    interval: [number, number];
+    oldOutsideInterval: boolean;
+  };
+}
+
+export interface RuleChange {
+  rule: string;
+  file: string;
+  cause: string;
+  old: number;
+  proposed: number;
+  changed: boolean;
+  evidence: {
+    outcomes: number;
+    causeOutcomes: number;
+    causeFired: number;
+    referenceOutcomes: number;
+    referenceFired: number;
+    parents: string[];
+    interval: [number, number];
+    oldOutsideInterval: boolean;
+    capped: boolean;
+    kept: boolean;
+    flat: boolean;
+  };
+}
+
+export interface ProposalResult {
+  fromVersion: string;
+  version: string;
+  priors: PriorChange[];
+  rules: RuleChange[];
+  changedPriors: number;
+  changedRules: number;
+  fit: { read: number; outcomes: number; withFiredRules: number; skipped: { noKnownCause: number; notStillFixed: number } };
+  backTest: { heldOut: number; scored: number; skipped: number; before: Accuracy; after: Accuracy };
+  settings: { strength: number; seed: number | string; holdOutFraction: number; intervalMass: number; draws: number };
+}
+

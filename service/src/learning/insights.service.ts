@@ -1,21 +1,12 @@
 import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { and, eq, gte, lt, sql, type SQL } from 'drizzle-orm';
 import { cases, type Db } from '@fuelwright/db';
-import { InsightsAccumulator, type Insights } from '@fuelwright/rules';
+import { InsightsAccumulator } from '@fuelwright/rules';
+import type { InsightsResponse } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { DiagnosisService } from '../diagnosis/diagnosis.service.js';
 import { InsightRollups, type RefreshReport } from './insight-rollups.js';
 import type { OutcomeFilter } from './outcome-repository.js';
-
-export interface InsightsResponse {
-  version: string;
-  from: string | null;
-  to: string | null;
-  /** Cases opened in the period under this version. */
-  cases: number;
-  outcomes: number;
-  insights: Insights;
-}
 
 /**
  * Insights for a ruleset version and period, merged from the stored day and month roll-ups

@@ -6,7 +6,7 @@ import type { Response } from 'express';
 import { and, desc, inArray } from 'drizzle-orm';
 import { Inject } from '@nestjs/common';
 import { outcomes, users, type Db } from '@fuelwright/db';
-import type { CaseOutcomesResponse, OutcomeDto, ProposalDto, ProposalListResponse, WorkOrderDto } from '@fuelwright/shared';
+import type { CaseOutcomesResponse, InsightsResponse, OutcomeDto, ProposalDto, ProposalListResponse, WorkOrderDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -17,7 +17,7 @@ import { CreateWorkOrderDto, InsightTableDto, LogOutcomeDto, PeriodDto, PublishD
 import { LogOutcomeCommand } from './commands/log-outcome.command.js';
 import { ListCaseOutcomesQuery } from './queries/list-case-outcomes.query.js';
 import { ListProposalsQuery } from './queries/list-proposals.query.js';
-import { InsightsService, type InsightsResponse } from './insights.service.js';
+import { InsightsService } from './insights.service.js';
 import { OutcomeRepository } from './outcome-repository.js';
 import { toOutcomeDto } from './outcome-dto.js';
 import { ProposalRunner, toProposalDto } from './proposal-runner.js';

@@ -2,7 +2,7 @@ import { Inject, Injectable, Logger, NotFoundException, ConflictException } from
 import { eq } from 'drizzle-orm';
 import { proposals, type Db, type ProposalRow } from '@fuelwright/db';
 import { proposeRuleset, validateRuleset, type RulesetSource } from '@fuelwright/rules';
-import type { ProposalDto, StartProposalRequest } from '@fuelwright/shared';
+import type { ProposalDto, ProposalResult, StartProposalRequest } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { FieldsBadRequest } from '../common/validation.js';
 import { DiagnosisService } from '../diagnosis/diagnosis.service.js';
@@ -10,10 +10,10 @@ import { OutcomeRepository } from './outcome-repository.js';
 
 export function toProposalDto(r: ProposalRow, withResult = true): ProposalDto {
   const result = r.result as Record<string, unknown> | null;
-  let shown: unknown = null;
+  let shown: ProposalResult | null = null;
   if (withResult && result) {
     const { source: _source, ...rest } = result;
-    shown = rest;
+    shown = rest as unknown as ProposalResult;
   }
   return {
     id: r.id,
@@ -87,6 +87,9 @@ export class ProposalRunner {
         },
       });
       const { ruleset: _r, ...result } = proposal;
+      // All but the source is what the proposal page reads: the shared wire type, checked here.
+      const { source: _source, ...shown } = result;
+      shown satisfies ProposalResult;
       await this.db
         .update(proposals)
         .set({ status: 'ready', progress: 1, result: JSON.parse(JSON.stringify(result)), finishedAt: new Date() })

@@ -249,3 +249,17 @@ export function correctedConditions(draft: ConditionsDraft, recorded: DiagnosisC
   }
   return now;
 }
+
+/**
+ * The form's messages after the air section changed: a `conditions.*` message goes once its field
+ * reads right, and one still wrong stays (with its current wording) until it is fixed; other
+ * messages are kept as they are.
+ */
+export function conditionErrorsAfterEdit(formErrors: Record<string, string>, draft: ConditionsDraft): Record<string, string> {
+  const still = parseConditionsDraft(draft).errors;
+  return Object.fromEntries(
+    Object.entries(formErrors)
+      .filter(([key]) => !key.startsWith('conditions.') || key in still)
+      .map(([key, message]) => [key, key.startsWith('conditions.') ? still[key] : message]),
+  );
+}

@@ -50,6 +50,7 @@ import {
   type WalkThroughMode,
 } from './walk-through-model';
 import {
+  conditionErrorsAfterEdit,
   correctedConditions,
   draftFromConditions,
   emptyConditionsDraft,
@@ -478,15 +479,7 @@ export const walkThroughMachine = setup({
         'INTAKE.CONDITIONS': {
           actions: assign({
             conditionsDraft: ({ event }) => event.draft,
-            // A message goes once its field reads right; one still wrong stays until it is fixed.
-            formErrors: ({ context, event }) => {
-              const still = parseConditionsDraft(event.draft).errors;
-              return Object.fromEntries(
-                Object.entries(context.formErrors)
-                  .filter(([key]) => !key.startsWith('conditions.') || key in still)
-                  .map(([key, message]) => [key, key.startsWith('conditions.') ? still[key] : message]),
-              );
-            },
+            formErrors: ({ context, event }) => conditionErrorsAfterEdit(context.formErrors, event.draft),
           }),
         },
       },
@@ -663,15 +656,7 @@ export const walkThroughMachine = setup({
         'FACTS.CONDITIONS': {
           actions: assign({
             correction: ({ context, event }) => context.correction && { ...context.correction, conditionsDraft: event.draft },
-            // As in the intake: a message goes once its field reads right.
-            formErrors: ({ context, event }) => {
-              const still = parseConditionsDraft(event.draft).errors;
-              return Object.fromEntries(
-                Object.entries(context.formErrors)
-                  .filter(([key]) => !key.startsWith('conditions.') || key in still)
-                  .map(([key, message]) => [key, key.startsWith('conditions.') ? still[key] : message]),
-              );
-            },
+            formErrors: ({ context, event }) => conditionErrorsAfterEdit(context.formErrors, event.draft),
           }),
         },
       },

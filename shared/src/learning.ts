@@ -98,13 +98,8 @@ export interface ProposalDto {
   result: ProposalResult | null;
 }
 
-/** One ruleset's accuracy on a proposal's held-out outcomes (shares 0..1). */
-export interface BackTestFigures {
-  top1Rate: number;
-  top3Rate: number;
-  /** Mean Brier score; null when nothing was ranked. */
-  brier: number | null;
-}
+/** One ruleset's accuracy on a proposal's held-out outcomes (shares 0..1; Brier null when nothing was ranked). */
+export type BackTestFigures = Pick<RankingAccuracy, 'top1Rate' | 'top3Rate' | 'brier'>;
 
 /** A proposal in the list: no diff and no evidence, only the back-test's headline figures once ready. */
 export interface ProposalSummaryDto extends Omit<ProposalDto, 'result'> {
@@ -209,14 +204,8 @@ export interface InsightsResponse {
  * without the ruleset source, which the server keeps to publish.
  */
 
-export interface Accuracy {
-  ranked: number;
-  top1: number;
-  top3: number;
-  top1Rate: number;
-  top3Rate: number;
-  brier: number | null;
-}
+/** Top-1, top-3 and Brier score of a ruleset on the held-out outcomes. */
+export type Accuracy = RankingAccuracy;
 
 export interface PriorChange {
   cause: string;

@@ -1,5 +1,5 @@
-import { useEffect } from 'react';
-import { Callout, FormGroup, SegmentedControl } from '@blueprintjs/core';
+import { useEffect, type ComponentProps } from 'react';
+import { Callout, FormGroup, Section, SectionCard, SegmentedControl } from '@blueprintjs/core';
 import {
   formatDensity,
   formatPercent,
@@ -193,5 +193,22 @@ export function ConditionsFields({
         {!user && <p className="fw-muted fw-small">Your units are kept in this browser.</p>}
       </details>
     </div>
+  );
+}
+
+/** The fields above as the collapsible "Today's air and fuel (optional)" section of a form step. */
+export function AirSection({ open, onToggle, ...fields }: ComponentProps<typeof ConditionsFields> & { open: boolean; onToggle: () => void }) {
+  return (
+    <Section
+      className="fw-diag-section"
+      title="Today's air and fuel (optional)"
+      subtitle="Air denser or thinner than on the day the setup was right, and old fuel, change what is likely."
+      collapsible
+      collapseProps={{ isOpen: open, onToggle }}
+    >
+      <SectionCard>
+        <ConditionsFields {...fields} />
+      </SectionCard>
+    </Section>
   );
 }

@@ -4,7 +4,7 @@ import { RefreshIcon } from '@blueprintjs/icons';
 import type { WalkThroughSend, WalkThroughSnapshot } from '../hooks/use-walk-through';
 import { conditionsDraftEntered, type ConditionsDraft } from '../machines/conditions-draft';
 import type { SetupDraftField } from '../machines/walk-through-model';
-import { ConditionsFields } from './conditions-fields';
+import { AirSection } from './conditions-fields';
 import { SetupFields } from './setup-fields';
 import { StepErrors } from './step-errors';
 
@@ -56,17 +56,14 @@ export function CorrectFactsStep({ snapshot, send }: { snapshot: WalkThroughSnap
           />
         </SectionCard>
       </Section>
-      <Section
-        className="fw-diag-section"
-        title="Today's air and fuel (optional)"
-        subtitle="Air denser or thinner than on the day the setup was right, and old fuel, change what is likely."
-        collapsible
-        collapseProps={{ isOpen: airOpen, onToggle: () => setAirShown(!airOpen) }}
-      >
-        <SectionCard>
-          <ConditionsFields draft={correction.conditionsDraft} onChange={changeConditions} errorsFor={fieldErrors} kartId={ctx.kartId} />
-        </SectionCard>
-      </Section>
+      <AirSection
+        open={airOpen}
+        onToggle={() => setAirShown(!airOpen)}
+        draft={correction.conditionsDraft}
+        onChange={changeConditions}
+        errorsFor={fieldErrors}
+        kartId={ctx.kartId}
+      />
       <div className="fw-diag-actions fw-diag-actions-main">
         <Button className="fw-touch" type="submit" intent="primary" size="large" icon={<RefreshIcon />} text="Save and rank again" loading={busy} />
         <Button className="fw-touch" size="large" variant="minimal" text="Cancel" disabled={busy} onClick={() => send({ type: 'FACTS.CANCEL' })} />

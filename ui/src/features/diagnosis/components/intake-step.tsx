@@ -8,7 +8,7 @@ import type { WalkThroughSend, WalkThroughSnapshot } from '../hooks/use-walk-thr
 import { conditionsDraftEntered, type ConditionsDraft } from '../machines/conditions-draft';
 import type { SetupDraftField } from '../machines/walk-through-model';
 import type { CatalogLookup } from './catalog-lookup';
-import { ConditionsFields } from './conditions-fields';
+import { AirSection } from './conditions-fields';
 import { KartFormInline } from './kart-form-inline';
 import { SetupFields } from './setup-fields';
 import { SymptomPicker } from './symptom-picker';
@@ -210,22 +210,14 @@ export function IntakeStep({
                 />
               </SectionCard>
             </Section>
-            <Section
-              className="fw-diag-section"
-              title="Today's air and fuel (optional)"
-              subtitle="Air denser or thinner than on the day the setup was right, and old fuel, change what is likely."
-              collapsible
-              collapseProps={{ isOpen: airOpen, onToggle: () => setAirShown(!airOpen) }}
-            >
-              <SectionCard>
-                <ConditionsFields
-                  draft={ctx.conditionsDraft}
-                  onChange={changeConditions}
-                  errorsFor={fieldErrors}
-                  kartId={isCase ? ctx.kartId : null}
-                />
-              </SectionCard>
-            </Section>
+            <AirSection
+              open={airOpen}
+              onToggle={() => setAirShown(!airOpen)}
+              draft={ctx.conditionsDraft}
+              onChange={changeConditions}
+              errorsFor={fieldErrors}
+              kartId={isCase ? ctx.kartId : null}
+            />
           </>
         )
       )}

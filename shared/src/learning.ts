@@ -73,6 +73,26 @@ export interface CaseOutcomesResponse {
   outcomes: CaseOutcomeDto[];
 }
 
+/** One published ruleset version (immutable once published). */
+export interface RulesetVersionInfo {
+  version: string;
+  parentVersion: string | null;
+  notes: string;
+  active: boolean;
+  publishedAt: string;
+  publishedBy: string | null;
+  rules: number;
+  causes: number;
+}
+
+/** GET /api/rulesets (shop, admin). */
+export interface RulesetsResponse {
+  /** The version new cases are ranked with. */
+  active: string;
+  /** Oldest first. */
+  versions: RulesetVersionInfo[];
+}
+
 export interface StartProposalRequest {
   /** Pseudo-count of the expert values: how many outcomes' worth of weight the current priors and ratios keep. */
   strength: number;

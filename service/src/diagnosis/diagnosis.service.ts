@@ -10,21 +10,10 @@ import {
   type Ruleset,
   type RulesetSource,
 } from '@fuelwright/rules';
-import type { CatalogResponse, RankRequest, RankResponse } from '@fuelwright/shared';
+import type { CatalogResponse, RankRequest, RankResponse, RulesetVersionInfo } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { FieldsBadRequest } from '../common/validation.js';
 import { DiagnosisPort } from './diagnosis.port.js';
-
-export interface RulesetVersionInfo {
-  version: string;
-  parentVersion: string | null;
-  notes: string;
-  active: boolean;
-  publishedAt: string;
-  publishedBy: string | null;
-  rules: number;
-  causes: number;
-}
 
 /**
  * Holds one built engine per ruleset version, each built once and reused for every request. The

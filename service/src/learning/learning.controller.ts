@@ -6,13 +6,13 @@ import type { Response } from 'express';
 import { and, desc, inArray } from 'drizzle-orm';
 import { Inject } from '@nestjs/common';
 import { outcomes, users, type Db } from '@fuelwright/db';
-import type { CaseOutcomesResponse, InsightsResponse, OutcomeDto, ProposalDto, ProposalListResponse, WorkOrderDto } from '@fuelwright/shared';
+import type { CaseOutcomesResponse, InsightsResponse, RulesetsResponse, OutcomeDto, ProposalDto, ProposalListResponse, WorkOrderDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { UuidParam } from '../common/uuid-param.js';
 import type { SessionUser } from '../common/session-user.js';
-import { DiagnosisService, type RulesetVersionInfo } from '../diagnosis/diagnosis.service.js';
+import { DiagnosisService } from '../diagnosis/diagnosis.service.js';
 import { CreateWorkOrderDto, InsightTableDto, LogOutcomeDto, PeriodDto, PublishDto, StartProposalDto } from './dto/learning.dto.js';
 import { LogOutcomeCommand } from './commands/log-outcome.command.js';
 import { ListCaseOutcomesQuery } from './queries/list-case-outcomes.query.js';
@@ -128,7 +128,7 @@ export class LearningController {
 
   @Get('rulesets')
   @Roles('shop', 'admin')
-  async rulesets(): Promise<{ active: string; versions: RulesetVersionInfo[] }> {
+  async rulesets(): Promise<RulesetsResponse> {
     return { active: this.diagnosis.currentVersion, versions: await this.diagnosis.versions() };
   }
 

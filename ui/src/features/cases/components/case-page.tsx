@@ -22,7 +22,7 @@ import { isApiError } from '../../../lib/api-client';
 import { useCurrentUser } from '../../../lib/current-user';
 import { formatSetupValue, SETUP_FIELD_LABELS } from '../../../lib/setup-fields';
 import { caseQueryKey, useCase } from '../api/get-case';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { catalogLabels, type CatalogLabels } from '../lib/catalog-labels';
 import { conditionLines } from '../lib/conditions';
 import { formatDateTime } from '../lib/format';

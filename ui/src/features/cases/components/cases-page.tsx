@@ -8,7 +8,7 @@ import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import { useCases } from '../api/get-cases';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useKarts } from '../api/get-karts';
 import {
   CASE_SORT_KEYS,

@@ -4,7 +4,7 @@ import { generatePath, Link, useParams } from 'react-router-dom';
 import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { caseStorageKey } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';
 import { WalkThrough } from './walk-through';

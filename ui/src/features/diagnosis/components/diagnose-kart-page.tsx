@@ -6,7 +6,7 @@ import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useRequiredUser } from '../../../lib/current-user';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useKarts } from '../api/get-karts';
 import { newCaseStorageKey } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';

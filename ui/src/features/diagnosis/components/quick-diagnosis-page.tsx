@@ -5,7 +5,7 @@ import { paths, signUpPath } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useCurrentUser } from '../../../lib/current-user';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { QUICK_DIAGNOSIS_KEY } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';
 import { WalkThrough } from './walk-through';

@@ -8,7 +8,7 @@ import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { formErrors } from '../../../lib/form-errors';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useKarts } from '../api/get-karts';
 import { useSaveQuickDiagnosis } from '../hooks/use-save-quick-diagnosis';
 import { loadQuickDiagnosis } from '../hooks/walk-through-storage';

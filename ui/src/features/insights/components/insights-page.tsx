@@ -7,9 +7,9 @@ import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { PeriodFilter } from '../../../components/period-filter';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useInsights, type InsightsResponse } from '../api/get-insights';
-import { useRulesetVersions } from '../api/get-ruleset-versions';
+import { useRulesets } from '../../../lib/rulesets';
 import {
   formatCount,
   formatMinutes,
@@ -282,7 +282,7 @@ export function InsightsPage() {
   const [params, setParams] = useSearchParams();
   const filter = periodFromSearch(params);
   const insights = useInsights(filter);
-  const versions = useRulesetVersions();
+  const versions = useRulesets();
   const catalog = useCatalog();
   const labels = labelsFrom(catalog.data);
   const setFilter = (next: Filter) => setParams(periodQueryString(next), { replace: true });

@@ -8,7 +8,7 @@ import { LinkButton } from '../../../components/link-button';
 import { useNotify } from '../../../components/toaster';
 import { useCurrentUser } from '../../../lib/current-user';
 import { caseOutcomesQueryKey, useCaseOutcomes } from '../api/get-case-outcomes';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { labelsFrom } from '../lib/labels';
 import { OutcomeForm } from './outcome-form';
 import { OutcomeHistory } from './outcome-history';

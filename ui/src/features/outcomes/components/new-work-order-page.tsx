@@ -7,7 +7,7 @@ import { Page } from '../../../components/page';
 import { TextField } from '../../../components/text-field';
 import { formErrors } from '../../../lib/form-errors';
 import { useCreateWorkOrder } from '../api/create-work-order';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useSharedCases } from '../api/get-shared-cases';
 import { formatDate, labelsFrom } from '../lib/labels';
 import { SymptomCautions } from './symptom-cautions';

@@ -8,7 +8,7 @@ import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
 import { formatSetupValue, SETUP_FIELD_LABELS } from '../../../lib/setup-fields';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useOutcomes } from '../api/get-outcomes';
 import { useWorkOrders } from '../api/get-work-orders';
 import { useRankSymptoms } from '../api/rank-symptoms';

@@ -6,7 +6,7 @@ import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useWorkOrders } from '../api/get-work-orders';
 import { formatDate, labelsFrom, type Labels } from '../lib/labels';
 import '../outcomes.css';

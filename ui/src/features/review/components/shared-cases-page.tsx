@@ -5,7 +5,7 @@ import { CASE_STATE_LABELS, SOMETHING_ELSE_ID, type CaseState, type SharedCaseSu
 import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useSharedCases } from '../api/get-shared-cases';
 import { formatPercent, formatWhen } from '../lib/format';
 import { groupByRacer } from '../lib/group-by-racer';

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { rulesetsQueryKey } from './get-rulesets';
+import { catalogQueryKey } from '../../../lib/catalog';
+import { rulesetsQueryKey } from '../../../lib/rulesets';
 
-const catalogQueryKey = ['catalog'] as const;
 const insightsQueryKey = ['insights'] as const;
 
 /** POST /api/rulesets/:version/activate (admin only): roll back (or forward); nothing is deleted. */

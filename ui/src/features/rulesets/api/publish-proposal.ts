@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { catalogQueryKey } from '../../../lib/catalog';
 import { proposalQueryKey, type Proposal } from './get-proposal';
 import { proposalsQueryKey } from './get-proposals';
-import { rulesetsQueryKey } from './get-rulesets';
+import { rulesetsQueryKey } from '../../../lib/rulesets';
 
 /** Screens that show the active version's catalog or figures refetch after a change of version. */
-const catalogQueryKey = ['catalog'] as const;
 const insightsQueryKey = ['insights'] as const;
 
 /** POST /api/rulesets/proposals/:id/publish (admin only): a new immutable version, made active. */

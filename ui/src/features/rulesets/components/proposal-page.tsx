@@ -10,7 +10,7 @@ import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
 import { isApiError } from '../../../lib/api-client';
 import { useRequiredUser } from '../../../lib/current-user';
-import { useCatalog } from '../api/get-catalog';
+import { useCatalog } from '../../../lib/catalog';
 import { useProposal, type Accuracy, type Proposal, type ProposalResult } from '../api/get-proposal';
 import { usePublishProposal } from '../api/publish-proposal';
 import { priorRows, ruleRows } from '../lib/diff';

@@ -1,8 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { CatalogResponse } from '@fuelwright/shared';
-import { api } from '../../../lib/api-client';
+import { api } from './api-client';
 
-/** GET /api/catalog: the current ruleset's symptoms, causes, checks and fixes, with their labels. */
+/*
+ * The active ruleset's catalog, read by many features (labels of symptoms, causes and checks; the
+ * walk-through's steps and cautions), so it lives here rather than in one of them.
+ */
+
+/** GET /api/catalog (open to visitors): symptoms, causes, checks with steps and cautions, fixes. */
 export function getCatalog(signal?: AbortSignal): Promise<CatalogResponse> {
   return api.get<CatalogResponse>('/catalog', { signal });
 }
@@ -10,7 +15,7 @@ export function getCatalog(signal?: AbortSignal): Promise<CatalogResponse> {
 export const catalogQueryKey = ['catalog'] as const;
 
 export function getCatalogQueryOptions() {
-  // A published ruleset never changes; a new version comes with a new deployment.
+  // It changes only when an admin publishes or activates a version, and that invalidates this key.
   return queryOptions({ queryKey: catalogQueryKey, queryFn: ({ signal }) => getCatalog(signal), staleTime: Infinity });
 }
 

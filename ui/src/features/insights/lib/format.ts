@@ -1,5 +1,5 @@
-import { SOMETHING_ELSE_ID, type CatalogResponse } from '@fuelwright/shared';
 import { API_BASE } from '../../../lib/api-client';
+import { humanizeId, type Labels } from '../../../lib/catalog';
 import type { Calibration } from '../api/get-insights';
 import { periodQueryString, type PeriodFilter } from '../../../lib/period';
 
@@ -24,23 +24,7 @@ export function formatCount(n: number): string {
   return n.toLocaleString();
 }
 
-/** An id as words when the catalog has no label for it. */
-export function humanizeId(id: string): string {
-  const words = id.replace(/[-_]+/g, ' ').trim();
-  return words ? words[0].toUpperCase() + words.slice(1) : id;
-}
-
-export interface Labels {
-  cause: (id: string) => string;
-  symptom: (id: string) => string;
-}
-
-export function labelsFrom(catalog: CatalogResponse | undefined): Labels {
-  const causes = new Map((catalog?.causes ?? []).map((c) => [c.id, c.label]));
-  causes.set(SOMETHING_ELSE_ID, catalog?.somethingElse.label ?? 'Something else');
-  const symptoms = new Map((catalog?.symptoms ?? []).map((s) => [s.id, s.label]));
-  return { cause: (id) => causes.get(id) ?? humanizeId(id), symptom: (id) => symptoms.get(id) ?? humanizeId(id) };
-}
+export { humanizeId, labelsFrom, type Labels } from '../../../lib/catalog';
 
 export type InsightTable = 'pairs' | 'labour' | 'wrong-way' | 'calibration';
 

@@ -1,13 +1,12 @@
-import { Button, NonIdealState } from '@blueprintjs/core';
-import { DiagnosisIcon, OfflineIcon } from '@blueprintjs/icons';
+import { DiagnosisIcon } from '@blueprintjs/icons';
 import { generatePath, Link, useParams } from 'react-router-dom';
 import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
-import { PageSpinner } from '../../../components/page-spinner';
 import { useCatalog } from '../../../lib/catalog';
 import { caseStorageKey } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';
 import { WalkThrough } from './walk-through';
+import { CatalogNotReady } from './catalog-not-ready';
 
 /** The walk-through of a saved case: picks up where it was left (this browser's place, checked against the server). */
 export function CaseWalkThroughPage() {
@@ -32,15 +31,8 @@ export function CaseWalkThroughPage() {
           catalog={catalog.data}
           options={{ mode: 'case', caseId, storageKey: caseStorageKey(caseId), cautionCheckIds: cautionCheckIds(catalog.data) }}
         />
-      ) : catalog.isError ? (
-        <NonIdealState
-          icon={<OfflineIcon size={48} />}
-          title="Cannot load the symptoms and checks"
-          description={catalog.error.message}
-          action={<Button className="fw-touch" size="large" intent="primary" text="Try again" onClick={() => void catalog.refetch()} />}
-        />
       ) : (
-        <PageSpinner label="Loading the symptoms and checks" />
+        <CatalogNotReady catalog={catalog} />
       )}
     </Page>
   );

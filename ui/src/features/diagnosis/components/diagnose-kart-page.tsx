@@ -1,16 +1,15 @@
 import { useCallback } from 'react';
-import { Button, NonIdealState } from '@blueprintjs/core';
-import { DiagnosisIcon, OfflineIcon } from '@blueprintjs/icons';
+import { DiagnosisIcon } from '@blueprintjs/icons';
 import { generatePath, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../app/paths';
 import { Page } from '../../../components/page';
-import { PageSpinner } from '../../../components/page-spinner';
 import { useRequiredUser } from '../../../lib/current-user';
 import { useCatalog } from '../../../lib/catalog';
 import { useKarts } from '../api/get-karts';
 import { newCaseStorageKey } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';
 import { WalkThrough } from './walk-through';
+import { CatalogNotReady } from './catalog-not-ready';
 
 /** "Diagnose a kart" (`?kartId=`): the intake of a new case; once opened, it continues on the case's walk-through. */
 export function DiagnoseKartPage() {
@@ -40,15 +39,8 @@ export function DiagnoseKartPage() {
           karts={karts.data}
           onCaseOpened={onCaseOpened}
         />
-      ) : catalog.isError ? (
-        <NonIdealState
-          icon={<OfflineIcon size={48} />}
-          title="Cannot load the symptoms and checks"
-          description={catalog.error.message}
-          action={<Button className="fw-touch" size="large" intent="primary" text="Try again" onClick={() => void catalog.refetch()} />}
-        />
       ) : (
-        <PageSpinner label="Loading the symptoms and checks" />
+        <CatalogNotReady catalog={catalog} />
       )}
     </Page>
   );

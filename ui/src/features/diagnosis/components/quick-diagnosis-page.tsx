@@ -1,14 +1,14 @@
-import { Button, Callout, NonIdealState } from '@blueprintjs/core';
-import { DiagnosisIcon, InfoSignIcon, OfflineIcon } from '@blueprintjs/icons';
+import { Callout } from '@blueprintjs/core';
+import { DiagnosisIcon, InfoSignIcon } from '@blueprintjs/icons';
 import { Link } from 'react-router-dom';
 import { paths, signUpPath } from '../../../app/paths';
 import { Page } from '../../../components/page';
-import { PageSpinner } from '../../../components/page-spinner';
 import { useCurrentUser } from '../../../lib/current-user';
 import { useCatalog } from '../../../lib/catalog';
 import { QUICK_DIAGNOSIS_KEY } from '../hooks/walk-through-storage';
 import { cautionCheckIds } from './caution-check-ids';
 import { WalkThrough } from './walk-through';
+import { CatalogNotReady } from './catalog-not-ready';
 
 /**
  * A quick diagnosis, open to visitors: the walk-through over the stateless ranking. Nothing is
@@ -38,15 +38,8 @@ export function QuickDiagnosisPage() {
           options={{ mode: 'quick', storageKey: QUICK_DIAGNOSIS_KEY, cautionCheckIds: cautionCheckIds(catalog.data) }}
           saveTo={saveTo}
         />
-      ) : catalog.isError ? (
-        <NonIdealState
-          icon={<OfflineIcon size={48} />}
-          title="Cannot load the symptoms and checks"
-          description={catalog.error.message}
-          action={<Button className="fw-touch" size="large" intent="primary" text="Try again" onClick={() => void catalog.refetch()} />}
-        />
       ) : (
-        <PageSpinner label="Loading the symptoms and checks" />
+        <CatalogNotReady catalog={catalog} />
       )}
     </Page>
   );

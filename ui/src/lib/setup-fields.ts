@@ -6,6 +6,7 @@
  */
 import {
   IDLE_SCREW_STATE_LABELS,
+  SETUP_FIELDS,
   type SetupField,
   type SetupSnapshot,
 } from '@fuelwright/shared';
@@ -14,19 +15,7 @@ import {
 export type RecordedSetupField = Exclude<SetupField, 'carburettorKind'>;
 
 /** In display order. */
-export const RECORDED_SETUP_FIELDS: readonly RecordedSetupField[] = [
-  'mainJet',
-  'pilotJet',
-  'needleClipGroove',
-  'airScrewTurnsOut',
-  'idleScrew',
-  'idleScrewTurns',
-  'foamFittedDate',
-  'lastRebuildDate',
-  'premixRatio',
-  'ventLinesFitted',
-  'ventLinesRoutedUp',
-];
+export const RECORDED_SETUP_FIELDS: readonly RecordedSetupField[] = SETUP_FIELDS.filter((f): f is RecordedSetupField => f !== 'carburettorKind');
 
 export const SETUP_FIELD_LABELS: Record<SetupField, string> = {
   carburettorKind: 'Carburettor',

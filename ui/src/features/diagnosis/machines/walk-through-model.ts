@@ -14,6 +14,7 @@ import {
   type SetupSnapshot,
   type SymptomReport,
 } from '@fuelwright/shared';
+import { RECORDED_SETUP_FIELDS } from '../../../lib/setup-fields';
 
 export type WalkThroughMode = 'quick' | 'case';
 
@@ -58,19 +59,8 @@ export type SetupDraftField = SetupNumberField | SetupDateField | SetupYesNoFiel
 /** Every setup value as typed: numbers and dates as text, yes/no as 'yes' | 'no', '' = not known. */
 export type SetupDraft = Partial<Record<SetupDraftField, string>>;
 
-export const SETUP_DRAFT_FIELDS: readonly SetupDraftField[] = [
-  'mainJet',
-  'pilotJet',
-  'needleClipGroove',
-  'airScrewTurnsOut',
-  'idleScrew',
-  'idleScrewTurns',
-  'foamFittedDate',
-  'lastRebuildDate',
-  'premixRatio',
-  'ventLinesFitted',
-  'ventLinesRoutedUp',
-];
+/** Every recorded setup field (all but the kart's carburettor kind), in display order. */
+export const SETUP_DRAFT_FIELDS: readonly SetupDraftField[] = RECORDED_SETUP_FIELDS;
 
 /** Field names, in trade words, for messages. */
 export const SETUP_FIELD_NAMES: Record<SetupDraftField, string> = {

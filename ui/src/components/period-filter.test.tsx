@@ -35,6 +35,13 @@ describe('period filter', () => {
     expect(onChange).toHaveBeenLastCalledWith({});
   });
 
+  it('offers no version choice when the page gives no versions', () => {
+    render(<PeriodFilter value={{ from: '2026-11-01' }} onChange={() => {}} idPrefix="p" />);
+    expect(screen.getByRole('group', { name: 'Period' })).toBeInTheDocument();
+    expect(screen.queryByLabelText('Ruleset version')).toBeNull();
+    expect(screen.getByLabelText('From')).toHaveValue('2026-11-01');
+  });
+
   it('says so when the first day comes after the last', () => {
     render(<PeriodFilter value={{ from: '2026-11-30', to: '2026-11-01' }} onChange={() => {}} versions={[]} />);
     expect(screen.getByText('The first day comes after the last.')).toBeInTheDocument();

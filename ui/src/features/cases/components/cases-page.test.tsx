@@ -1,4 +1,4 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import { makeUser, meReply, mockApi, renderApp, setPhoneWidth } from '../../../test-utils';
@@ -59,6 +59,59 @@ describe('case list', () => {
     expect(await screen.findByText('No cases match')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Show all cases' }));
     await waitFor(() => expect(rowIds()).toEqual(['c-abandoned', 'c-open']));
+  });
+
+  it('filters by top cause with the causes in the list, labelled from the catalog, kept in the address', async () => {
+    setPhoneWidth(false);
+    const calls = api();
+    const user = userEvent.setup();
+    const { router } = renderApp('/cases');
+    await screen.findByRole('table', { name: 'Your cases' });
+    const select = screen.getByLabelText('Top cause') as HTMLSelectElement;
+    await waitFor(() => expect([...select.options].map((o) => o.text)).toContain('Idle screw holds the slide open'));
+    // Only the two causes the cases hold, by label; not the whole catalog.
+    expect([...select.options].map((o) => [o.value, o.text])).toEqual([
+      ['', 'All top causes'],
+      ['foam-degraded', 'Bowl foam missing, rotten or soaked'],
+      ['idle-screw-set', 'Idle screw holds the slide open'],
+    ]);
+
+    await user.selectOptions(select, 'idle-screw-set');
+    await waitFor(() => expect(rowIds()).toEqual(['c-abandoned']));
+    expect(router.state.location.search).toBe('?cause=idle-screw-set');
+    expect(screen.getByText('1 of 2 cases')).toBeInTheDocument();
+    // Filtered in the page: the server was never asked for a cause.
+    expect(calls.every((c) => !c.path.includes('cause'))).toBe(true);
+
+    await user.click(screen.getByRole('button', { name: 'Clear filters' }));
+    await waitFor(() => expect(rowIds()).toEqual(['c-abandoned', 'c-open']));
+    expect(router.state.location.search).toBe('');
+  });
+
+  it('filters by the day a case was opened, from the address on load, and offers to clear when nothing matches', async () => {
+    setPhoneWidth(false);
+    api();
+    const user = userEvent.setup();
+    // As after a reload: the period comes from the address.
+    const { router } = renderApp('/cases?from=2026-11-15&sort=kart');
+    await screen.findByRole('table', { name: 'Your cases' });
+    expect(rowIds()).toEqual(['c-open']);
+    const period = screen.getByRole('group', { name: 'Period' });
+    expect(within(period).getByLabelText('From')).toHaveValue('2026-11-15');
+    expect(within(period).queryByLabelText('Ruleset version')).toBeNull();
+
+    // The last day is included: a case opened on 20 November is in "to 20 November".
+    fireEvent.change(within(period).getByLabelText('To (included)'), { target: { value: '2026-11-20' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?from=2026-11-15&sort=kart&to=2026-11-20'));
+    expect(rowIds()).toEqual(['c-open']);
+
+    fireEvent.change(within(period).getByLabelText('To (included)'), { target: { value: '2026-11-16' } });
+    expect(await screen.findByText('No cases match')).toBeInTheDocument();
+    expect(screen.getByText(/No case has opened .* to .*\. Change the filters/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Show all cases' }));
+    await waitFor(() => expect(rowIds()).toEqual(['c-open', 'c-abandoned']));
+    // The order is not a filter: it stays.
+    expect(router.state.location.search).toBe('?sort=kart');
   });
 
   it('shows cards with a sort control on a phone', async () => {

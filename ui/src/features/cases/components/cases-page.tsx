@@ -6,6 +6,8 @@ import { CASE_STATES, CASE_STATE_LABELS, type CaseSummaryDto } from '@fuelwright
 import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
+import { PeriodFilter } from '../../../components/period-filter';
+import { periodFromSearch, type PeriodFilter as Period } from '../../../lib/period';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import { useCases } from '../api/get-cases';
 import { useCatalog } from '../../../lib/catalog';
@@ -13,16 +15,19 @@ import { useKarts } from '../api/get-karts';
 import {
   CASE_SORT_KEYS,
   CASE_SORT_LABELS,
+  filterCases,
   firstDirection,
   isCaseState,
   nextSort,
   parseSort,
   sortCases,
+  topCauseOptions,
+  type CaseListFilter,
   type CaseSort,
   type CaseSortKey,
 } from '../lib/case-list';
 import { catalogLabels, type CatalogLabels } from '../lib/catalog-labels';
-import { formatDateTime } from '../lib/format';
+import { formatDate, formatDateTime } from '../lib/format';
 import { PHONE_QUERY } from '../lib/phone';
 import { CaseStateTag } from './case-state-tag';
 import { ProbabilityBar } from './probability-bar';
@@ -132,13 +137,32 @@ function Filter({ id, label, children, className }: { id: string; label: string;
   );
 }
 
-/** The racer's cases: filter by state and kart, sort by any column (a card list on a phone). */
+/** What the filters hold, in words, for the "no case matches" message. */
+function describeFilters(parts: { state?: string; kart?: string; cause?: string; period: Period }): string {
+  const words: string[] = [];
+  if (parts.state) words.push(`state “${parts.state}”`);
+  if (parts.kart) words.push(`kart “${parts.kart}”`);
+  if (parts.cause) words.push(`top cause “${parts.cause}”`);
+  const { from, to } = parts.period;
+  if (from && to) words.push(`opened ${formatDate(from)} to ${formatDate(to)}`);
+  else if (from) words.push(`opened on or after ${formatDate(from)}`);
+  else if (to) words.push(`opened on or before ${formatDate(to)}`);
+  return words.join(', ');
+}
+
+/**
+ * The racer's cases: filter by state and kart (on the server), by top cause and opening period (in
+ * the page), sort by any column (a card list on a phone). Every filter and the order live in the
+ * address, so a reload or a shared link keeps them.
+ */
 export function CasesPage() {
   const [params, setParams] = useSearchParams();
   const stateParam = params.get('state');
   const state = isCaseState(stateParam) ? stateParam : undefined;
   const kartId = params.get('kartId') ?? undefined;
   const sort = parseSort(params.get('sort'), params.get('dir'));
+  const period = periodFromSearch(params);
+  const listFilter: CaseListFilter = { cause: params.get('cause') ?? undefined, from: period.from, to: period.to };
   const cases = useCases({ state, kartId });
   const catalog = useCatalog();
   const karts = useKarts();
@@ -162,8 +186,11 @@ export function CasesPage() {
     update({ sort: next.key, dir: next.dir });
   };
 
-  const list = cases.data ? sortCases(cases.data, sort, labels) : [];
-  const filtered = Boolean(state || kartId);
+  const loaded = cases.data ?? [];
+  const list = sortCases(filterCases(loaded, listFilter), sort, labels);
+  const filtered = Boolean(state || kartId || listFilter.cause || listFilter.from || listFilter.to);
+  const causeOptions = [{ value: '', label: 'All top causes' }, ...topCauseOptions(loaded, labels, listFilter.cause)];
+  const clearAll = () => update({ state: undefined, kartId: undefined, cause: undefined, from: undefined, to: undefined });
   const kartOptions = [
     { value: '', label: 'All karts' },
     ...(karts.data ?? []).map((kart) => ({ value: kart.id, label: kart.name })),
@@ -202,6 +229,19 @@ export function CasesPage() {
             options={kartOptions}
           />
         </Filter>
+        <Filter id="cases-cause" label="Top cause" className="fw-filter-cause">
+          <HTMLSelect
+            id="cases-cause"
+            large
+            fill
+            value={listFilter.cause ?? ''}
+            onChange={(event) => update({ cause: event.currentTarget.value || undefined })}
+            options={causeOptions}
+          />
+        </Filter>
+        <div className="fw-filter-period">
+          <PeriodFilter value={{ from: period.from, to: period.to }} onChange={(next) => update({ from: next.from, to: next.to })} idPrefix="cases-opened" />
+        </div>
         {phone && (
           <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
             <div className="fw-sort-row">
@@ -227,7 +267,7 @@ export function CasesPage() {
           </Filter>
         )}
         {filtered && (
-          <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Show all cases" onClick={() => update({ state: undefined, kartId: undefined })} />
+          <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Clear filters" onClick={clearAll} />
         )}
       </div>
 
@@ -246,15 +286,26 @@ export function CasesPage() {
           title={filtered ? 'No cases match' : 'No cases yet'}
           description={
             filtered
-              ? 'No case has this state on this kart. Change the filters or show all cases.'
+              ? `No case has ${describeFilters({
+                  state: state && CASE_STATE_LABELS[state],
+                  kart: kartId && kartOptions.find((o) => o.value === kartId)?.label,
+                  cause: listFilter.cause && causeOptions.find((o) => o.value === listFilter.cause)?.label,
+                  period,
+                })}. Change the filters or show all cases.`
               : 'A case keeps one running problem: what you noticed, the checks you did and what fixed it. Open one from a kart with “Diagnose this kart”.'
           }
-          action={!filtered ? <LinkButton className="fw-touch" size="large" intent="primary" to={paths.karts} text="Go to my karts" /> : undefined}
+          action={
+            filtered ? (
+              <Button className="fw-touch" size="large" intent="primary" text="Show all cases" onClick={clearAll} />
+            ) : (
+              <LinkButton className="fw-touch" size="large" intent="primary" to={paths.karts} text="Go to my karts" />
+            )
+          }
         />
       ) : (
         <>
           <p className="fw-muted fw-small fw-result-count" aria-live="polite">
-            {list.length === 1 ? '1 case' : `${list.length} cases`}
+            {list.length === loaded.length ? (list.length === 1 ? '1 case' : `${list.length} cases`) : `${list.length} of ${loaded.length} cases`}
             {phone ? `, sorted by ${CASE_SORT_LABELS[sort.key].toLowerCase()}` : ''}
             {cases.isPlaceholderData ? ' (updating…)' : ''}
           </p>

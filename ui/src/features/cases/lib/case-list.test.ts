@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { CaseSummaryDto } from '@fuelwright/shared';
-import { formatProbability, nextSort, parseSort, sortCases } from './case-list';
+import { filterCases, formatProbability, localDay, NO_TOP_CAUSE, nextSort, parseSort, sortCases, topCauseOptions } from './case-list';
 import { catalogLabels, humanizeId } from './catalog-labels';
 
 const summary = (patch: Partial<CaseSummaryDto> & Pick<CaseSummaryDto, 'id'>): CaseSummaryDto => ({
@@ -103,5 +103,33 @@ describe('catalog labels', () => {
     );
     expect(labels.text('Case opened with 2 symptoms (ruleset 1.0.0)')).toBe('Case opened with 2 symptoms (ruleset 1.0.0)');
     expect(labels.text('left well-alone as is')).toBe('left well-alone as is');
+  });
+});
+
+describe('case list filters', () => {
+  it('keeps the cases with the chosen top cause, or those not ranked yet', () => {
+    expect(ids(filterCases(CASES, { cause: 'foam' }))).toEqual(['b']);
+    expect(ids(filterCases(CASES, { cause: NO_TOP_CAUSE }))).toEqual(['c']);
+    expect(ids(filterCases(CASES, {}))).toEqual(['a', 'b', 'c']);
+  });
+
+  it('keeps the cases opened within the period, both days included, in the local calendar', () => {
+    const day = (c: CaseSummaryDto) => localDay(c.openedAt);
+    const [a, b] = CASES;
+    expect(ids(filterCases(CASES, { from: day(a), to: day(b) }))).toEqual(['a', 'b']);
+    expect(ids(filterCases(CASES, { from: day(b) }))).toEqual(['b']);
+    expect(ids(filterCases(CASES, { to: day(a) }))).toEqual(['a', 'c']);
+    expect(ids(filterCases(CASES, { cause: 'vents', from: day(b) }))).toEqual([]);
+    const local = new Date(2026, 10, 2, 23, 30);
+    expect(localDay(local.toISOString())).toBe('2026-11-02');
+  });
+
+  it('offers the causes present, by label, "None yet" last, and keeps a chosen cause the list lacks', () => {
+    expect(topCauseOptions(CASES, LABELS)).toEqual([
+      { value: 'foam', label: 'Bowl foam rotten' },
+      { value: 'vents', label: 'Vent lines off' },
+      { value: NO_TOP_CAUSE, label: 'None yet' },
+    ]);
+    expect(topCauseOptions([CASES[1]], LABELS, 'vents').map((o) => o.value)).toEqual(['foam', 'vents']);
   });
 });

@@ -90,6 +90,58 @@ export function sortCases(cases: readonly CaseSummaryDto[], sort: CaseSort, labe
     .map(({ c }) => c);
 }
 
+/** The filters applied to the loaded list in the page (state and kart are applied by the server). */
+export interface CaseListFilter {
+  /** A top cause id, or `NO_TOP_CAUSE` for cases not ranked yet. */
+  cause?: string;
+  /** First day the case was opened on, YYYY-MM-DD in the user's time zone. */
+  from?: string;
+  /** Last day (included), YYYY-MM-DD. */
+  to?: string;
+}
+
+/** The cause filter's value for cases without a top cause yet. */
+export const NO_TOP_CAUSE = 'none';
+
+/** An ISO timestamp's day (YYYY-MM-DD) in the user's time zone, as a date field shows it. */
+export function localDay(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return '';
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+}
+
+/** The cases with that top cause, opened within the period (both ends included). */
+export function filterCases(cases: readonly CaseSummaryDto[], filter: CaseListFilter): CaseSummaryDto[] {
+  return cases.filter((c) => {
+    if (filter.cause && (c.topCauseId ?? NO_TOP_CAUSE) !== filter.cause) return false;
+    if (filter.from || filter.to) {
+      const day = localDay(c.openedAt);
+      if (filter.from && day < filter.from) return false;
+      if (filter.to && day > filter.to) return false;
+    }
+    return true;
+  });
+}
+
+/**
+ * The top causes present in the list, by label, for the cause filter; "None yet" last when a case
+ * has none; the chosen cause kept even when the list no longer holds it.
+ */
+export function topCauseOptions(cases: readonly CaseSummaryDto[], labels: Pick<SortLabels, 'cause'>, chosen?: string): { value: string; label: string }[] {
+  const ids = new Set<string>();
+  let unranked = false;
+  for (const c of cases) {
+    if (c.topCauseId) ids.add(c.topCauseId);
+    else unranked = true;
+  }
+  if (chosen === NO_TOP_CAUSE) unranked = true;
+  else if (chosen) ids.add(chosen);
+  const options = [...ids].map((id) => ({ value: id, label: labels.cause(id) })).sort((a, b) => collator.compare(a.label, b.label));
+  if (unranked) options.push({ value: NO_TOP_CAUSE, label: 'None yet' });
+  return options;
+}
+
 /** A probability 0..1 as a whole percentage ("48%"); never rounded to 0% or 100% unless it is. */
 export function formatProbability(p: number): string {
   if (!Number.isFinite(p)) return '—';

@@ -180,7 +180,7 @@ async function airAndFuel(page: Page, baseUrl: string, tag: string): Promise<voi
   await waitForScreen(page, 'ranking');
   await shownCauses(page);
   // The rules that fire on a density change of -3 % or more and on fuel 30 days old or more
-  // (rules/src/rulesets/1.0.0/rules/jetting-and-air.json, fuel-supply.json).
+  // (rules/src/rulesets/1.0.1/rules/jetting-and-air.json, fuel-supply.json).
   const air = page.locator('[data-cause="air-density-changed"]');
   await air.getByRole('button', { name: /^Why\? \(\d+\)$/ }).click();
   await expect.poll(() => air.locator('.fw-diag-reasons').innerText(), WAIT).toMatch(/thinner than when the jetting was right; thinner air richens the mixture/);

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
+import { SHIPPED_RULESET_VERSION } from '@fuelwright/rules';
 import type { CatalogResponse } from '@fuelwright/shared';
 import { DESKTOP, PHONE, POLL, apiFromPage, launchChromium, trackedPages, shareCaseAndAccept, signInQuietly, signInWithForm, snapPart, snapTop } from './browser.js';
 
@@ -308,10 +309,10 @@ describe('outcomes, insights and ruleset versions in the browser', () => {
     await snapTop(adminPhone, 'outcomes-rulesets-admin-phone');
 
     // Roll back to the shipped version (nothing is deleted; other browser tests expect it active).
-    await versions.getByRole('button', { name: 'Roll back to 1.0.0' }).click();
-    await admin.getByRole('alertdialog').getByRole('button', { name: 'Roll back to 1.0.0' }).click();
+    await versions.getByRole('button', { name: `Roll back to ${SHIPPED_RULESET_VERSION}` }).click();
+    await admin.getByRole('alertdialog').getByRole('button', { name: `Roll back to ${SHIPPED_RULESET_VERSION}` }).click();
     await versions.getByRole('row').filter({ hasText: 'Shipped expert ruleset' }).getByText('Active', { exact: true }).waitFor();
-    expect((await apiFromPage<{ version: string }>(admin, 'GET', '/api/catalog')).body.version).toBe('1.0.0');
+    expect((await apiFromPage<{ version: string }>(admin, 'GET', '/api/catalog')).body.version).toBe(SHIPPED_RULESET_VERSION);
     expect(await versions.getByRole('button', { name: `Activate ${proposedVersion}` }).count()).toBe(1);
   });
 

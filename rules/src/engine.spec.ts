@@ -4,7 +4,7 @@ import { CHECK_RESULT_VALUES, ENGINE_TEMPS, THROTTLE_BANDS, TRACK_POSITIONS, typ
 import { buildDiagnosisEngine } from './engine.js';
 import { createPlainEvaluator } from './plain.js';
 import { RankRequestError } from './request.js';
-import { SHIPPED_RULESET_SOURCES } from './ruleset.js';
+import { SHIPPED_RULESET_SOURCES, SHIPPED_RULESET_VERSION } from './ruleset.js';
 import { toRulesetSource, validateRuleset } from './validate.js';
 import { generateRequests, generateRulesetSource } from './generate-ruleset.js';
 import { AS_OF, engine, ids, plain, prob, rank, ruleset } from './test-support/shipped.js';
@@ -69,7 +69,7 @@ describe('json-rules-engine path and plain evaluator agree', () => {
   }, 60_000);
 
   it('on a generated ruleset of 2,000 rules over 200 causes', async () => {
-    const base = SHIPPED_RULESET_SOURCES['1.0.0'].catalog as { cautions: unknown[]; groups: unknown[] };
+    const base = SHIPPED_RULESET_SOURCES[SHIPPED_RULESET_VERSION].catalog as { cautions: unknown[]; groups: unknown[] };
     const source = generateRulesetSource({ rules: 2000, causes: 200, symptoms: 160, checks: 300 }, 3, base);
     const generated = validateRuleset(source);
     expect(generated.rules).toHaveLength(2000);
@@ -158,7 +158,7 @@ describe('response and catalog', () => {
   it('the response is plain JSON, carries the version, and its probabilities sum to one', async () => {
     const res = await rank({ symptoms: ['bog-on-acceleration'] });
     expect(JSON.parse(JSON.stringify(res))).toEqual(res);
-    expect(res.version).toBe('1.0.0');
+    expect(res.version).toBe('1.0.1');
     const total = res.causes.reduce((s, c) => s + c.probability, 0) + res.somethingElse.probability;
     expect(total).toBeCloseTo(1, 12);
     for (let i = 1; i < res.causes.length; i++) expect(res.causes[i - 1].probability).toBeGreaterThanOrEqual(res.causes[i].probability);
@@ -166,7 +166,7 @@ describe('response and catalog', () => {
 
   it('the catalog resolves cautions, marks stop checks and lists groups with their opening minutes', () => {
     const c = engine.catalog;
-    expect(c.version).toBe('1.0.0');
+    expect(c.version).toBe('1.0.1');
     expect(c.checks.filter((k) => k.stopOnFault).map((k) => k.id).sort()).toEqual(['fuel-leak-look', 'piston-look', 'plug-reads-lean', 'throttle-return']);
     const throttle = c.checks.find((k) => k.id === 'throttle-return')!;
     expect(throttle.cautions[0]).toMatchObject({ id: 'throttle-stop', severity: 'stop' });
@@ -190,8 +190,12 @@ describe('response and catalog', () => {
     const running = catalog.checks.filter((k) => /run a few laps|start it|engine warm/i.test(k.steps.join(' ')));
     expect(running.length).toBeGreaterThan(3);
     for (const k of running) expect(k.cautions, k.id).toContain('throttle-snap-back');
-    const fuelHandling = catalog.checks.filter((k) => /fuel/i.test(k.steps.join(' ')) && k.group !== 'outside');
-    for (const k of fuelHandling) expect(k.cautions, k.id).toContain('fuel-flammable');
+    const fuelHandling = catalog.checks.filter((k) => /fuel/i.test(k.steps.join(' ')));
+    expect(fuelHandling.map((k) => k.id)).toEqual(expect.arrayContaining(['premix-record', 'vent-lines-look', 'fuel-sample', 'foam-inspect']));
+    for (const k of fuelHandling) {
+      expect(k.hazards, k.id).toContain('fuel');
+      expect(k.cautions, k.id).toContain('fuel-flammable');
+    }
   });
 
   it('the throttle check leads the plan until it is answered', async () => {
@@ -242,7 +246,7 @@ describe('stop findings', () => {
 describe('a replaceable ruleset', () => {
   it('a re-fitted version (new prior and likelihood ratio) builds and ranks by its own numbers', async () => {
     const source = toRulesetSource(ruleset) as ReturnType<typeof toRulesetSource> & { catalog: any; ruleFiles: any };
-    source.catalog.version = '1.0.1';
+    source.catalog.version = '1.1.0';
     source.catalog.causes.find((c: { id: string }) => c.id === 'choke-left-on').prior = 0.2;
     const rule = source.ruleFiles['rules/starting.json'].rules.find((r: { name: string }) => r.name === 'rich-blubber--choke-left-on');
     rule.event.params.lr = 6;
@@ -250,7 +254,7 @@ describe('a replaceable ruleset', () => {
     const req = { symptoms: ['rich-blubber'], asOf: AS_OF };
     const before = await engine.rank(req);
     const after = await refit.rank(req);
-    expect(after.version).toBe('1.0.1');
+    expect(after.version).toBe('1.1.0');
     expect(ids(after, 1)).toEqual(['choke-left-on']);
     expect(prob(after, 'choke-left-on')).toBeGreaterThan(prob(before, 'choke-left-on'));
     // The shipped engine is untouched.

@@ -5,13 +5,18 @@
  */
 import type { Ruleset, RulesetSource } from './model.js';
 import { source as v1_0_0 } from './rulesets/1.0.0/index.js';
+import { source as v1_0_1 } from './rulesets/1.0.1/index.js';
 import { validateRuleset } from './validate.js';
 
 /** The version `loadRuleset()` returns. */
-export const SHIPPED_RULESET_VERSION = '1.0.0';
+export const SHIPPED_RULESET_VERSION = '1.0.1';
 
-/** Raw JSON of each ruleset version shipped in this package. */
-export const SHIPPED_RULESET_SOURCES: Readonly<Record<string, RulesetSource>> = { '1.0.0': v1_0_0 };
+/**
+ * Raw JSON of each ruleset version shipped in this package. A shipped version is stored in the
+ * `rulesets` table on first start and is then immutable (cases keep the version they were opened
+ * with), so a shipped folder is never edited once released: a change goes into a new folder.
+ */
+export const SHIPPED_RULESET_SOURCES: Readonly<Record<string, RulesetSource>> = { '1.0.0': v1_0_0, '1.0.1': v1_0_1 };
 
 const cache = new Map<string, Ruleset>();
 

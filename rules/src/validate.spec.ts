@@ -29,7 +29,7 @@ const showsA = { fact: 'symptoms', operator: 'shows', value: { symptom: 'sym-a' 
 describe('the shipped ruleset', () => {
   it('validates, is frozen, and has a version matching its folder', () => {
     const ruleset = loadRuleset();
-    expect(ruleset.version).toBe('1.0.0');
+    expect(ruleset.version).toBe('1.0.1');
     expect(ruleset.rules.length).toBeGreaterThan(200);
     expect(Object.isFrozen(ruleset)).toBe(true);
     expect(Object.isFrozen(ruleset.catalog.checks[0].tests)).toBe(true);
@@ -278,6 +278,13 @@ describe('rule problems name the file, the rule (name and position) and the fiel
   });
 
   it('the shipped JSON source is what loadRuleset validates', () => {
-    expect(Object.keys(SHIPPED_RULESET_SOURCES['1.0.0'].ruleFiles).every((f) => f.startsWith('rules/'))).toBe(true);
+    expect(Object.keys(SHIPPED_RULESET_SOURCES['1.0.1'].ruleFiles).every((f) => f.startsWith('rules/'))).toBe(true);
+  });
+
+  it('keeps every shipped version loadable under its own number (cases keep the version they were opened with)', () => {
+    expect(Object.keys(SHIPPED_RULESET_SOURCES)).toEqual(['1.0.0', '1.0.1']);
+    for (const v of Object.keys(SHIPPED_RULESET_SOURCES)) expect(loadRuleset(v).version).toBe(v);
+    // 1.0.0 is as released: the fuel cautions of the premix and vent-line checks came in 1.0.1.
+    expect(loadRuleset('1.0.0').catalog.checks.find((k) => k.id === 'premix-record')!.cautions).toEqual([]);
   });
 });

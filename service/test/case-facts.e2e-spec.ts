@@ -3,7 +3,7 @@
  * again under its own version with the results so far, the opening ranking is kept, the timeline
  * shows the step, bad input names the field and writes nothing, and only the owner of an open
  * case may do it. The rule that fires is the shipped ruleset's "denser-air-lean-top" (3 % or more
- * denser air with a lean top end points at the air density; rules/src/rulesets/1.0.0), not a
+ * denser air with a lean top end points at the air density; rules/src/rulesets/1.0.1), not a
  * figure invented here.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';

@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq, inArray } from 'drizzle-orm';
 import { insightRollupDirty, insightRollups, outcomes } from '@fuelwright/db';
-import { computeInsights, loadRuleset, type OutcomeRecord } from '@fuelwright/rules';
+import { SHIPPED_RULESET_VERSION, computeInsights, loadRuleset, type OutcomeRecord } from '@fuelwright/rules';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
 import { InsightsService } from '../src/learning/insights.service.js';
@@ -109,12 +109,12 @@ describe('insight roll-ups', () => {
 
   it('reads whole months from their month row and only the end days from day rows', async () => {
     const rollups = t.app.get(InsightsService).rollups;
-    expect((await rollups.states('1.0.0', '2026-02-01', '2026-03-31')).length).toBe(2);
+    expect((await rollups.states(SHIPPED_RULESET_VERSION, '2026-02-01', '2026-03-31')).length).toBe(2);
     // 2026-01-20..31 (up to 12 days), February and March whole, 2026-04-01..05 (up to 5 days).
-    const mixed = await rollups.states('1.0.0', '2026-01-20', '2026-04-05');
+    const mixed = await rollups.states(SHIPPED_RULESET_VERSION, '2026-01-20', '2026-04-05');
     expect(mixed.length).toBeLessThanOrEqual(12 + 2 + 5);
     expect(mixed.length).toBeGreaterThan(2);
-    expect(await rollups.states('1.0.0', '2026-03-10', '2026-03-01')).toEqual([]);
+    expect(await rollups.states(SHIPPED_RULESET_VERSION, '2026-03-10', '2026-03-01')).toEqual([]);
   });
 
   it('follows a correction: the superseded outcome stops counting on its own day and month', async () => {
@@ -123,7 +123,7 @@ describe('insight roll-ups', () => {
     const fixedCause = target.confirmedCauses.includes('foam-degraded') ? 'return-tube-loose' : 'foam-degraded';
     const [row] = await t.db.db
       .insert(outcomes)
-      .values({ rulesetVersion: '1.0.0', symptoms: target.symptoms, setup: target.setup ?? {}, openingRank: target.openingRank!, confirmedCauses: [fixedCause], fix: 'Corrected', supersedesId: target.id, demo: true })
+      .values({ rulesetVersion: SHIPPED_RULESET_VERSION, symptoms: target.symptoms, setup: target.setup ?? {}, openingRank: target.openingRank!, confirmedCauses: [fixedCause], fix: 'Corrected', supersedesId: target.id, demo: true })
       .returning();
     await reload();
     expect(current.some((o) => o.id === target.id)).toBe(false);
@@ -155,7 +155,7 @@ describe('insight roll-ups', () => {
 
   it('rebuilds from the outcomes when the roll-ups are lost, and drops days of a version no ruleset knows', async () => {
     await t.db.db.delete(insightRollups);
-    await t.db.db.insert(insightRollupDirty).values([...new Set(current.map((o) => o.at.slice(0, 10)))].map((day) => ({ rulesetVersion: '1.0.0', day })));
+    await t.db.db.insert(insightRollupDirty).values([...new Set(current.map((o) => o.at.slice(0, 10)))].map((day) => ({ rulesetVersion: SHIPPED_RULESET_VERSION, day })));
     const res = await query('2026-01-20', '2026-03-05');
     expectClose(res.body.insights, reference('2026-01-20', '2026-03-05'));
     // A day of an unknown version is dropped quietly; nothing stays marked.

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { proposals, users } from '@fuelwright/db';
+import { SHIPPED_RULESET_VERSION } from '@fuelwright/rules';
 import { PROPOSAL_LIST_LIMIT, type CaseDto, type CaseOutcomeDto, type OutcomeDto, type ProposalDto, type ProposalSummaryDto, type WorkOrderDto } from '@fuelwright/shared';
 import { eq } from 'drizzle-orm';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
@@ -119,7 +120,7 @@ describe('reading back outcomes, proposals and work orders', () => {
 
       const listed: ProposalSummaryDto[] = (await shop.get('/api/rulesets/proposals')).body.proposals;
       expect(listed.map((p) => p.id)).toEqual([b.id, a.id]);
-      expect(listed[0]).toMatchObject({ status: 'ready', proposedVersion: '1.2.0', baseVersion: '1.0.0', strength: 400, createdByName: await nameOf(admin), progress: 1 });
+      expect(listed[0]).toMatchObject({ status: 'ready', proposedVersion: '1.2.0', baseVersion: SHIPPED_RULESET_VERSION, strength: 400, createdByName: await nameOf(admin), progress: 1 });
       expect(listed[1]).toMatchObject({ status: 'ready', proposedVersion: '1.1.0', strength: 100, createdByName: await nameOf(shop) });
       expect(listed[0]).not.toHaveProperty('result');
       // The figures are the ones the full proposal carries.
@@ -139,7 +140,7 @@ describe('reading back outcomes, proposals and work orders', () => {
       const after: ProposalSummaryDto[] = (await admin.get('/api/rulesets/proposals')).body.proposals;
       expect(after.find((p) => p.id === a.id)).toMatchObject({ status: 'published', proposedVersion: '1.1.0' });
       expect(after.find((p) => p.id === b.id)?.status).toBe('ready');
-      await admin.post('/api/rulesets/1.0.0/activate');
+      await admin.post(`/api/rulesets/${SHIPPED_RULESET_VERSION}/activate`);
     });
 
     it(`stops at the newest ${PROPOSAL_LIST_LIMIT}, and names nobody when the starter's account is gone`, async () => {

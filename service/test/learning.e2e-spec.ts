@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { outcomes } from '@fuelwright/db';
+import { SHIPPED_RULESET_VERSION } from '@fuelwright/rules';
 import type { CaseDto, ProposalDto } from '@fuelwright/shared';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
@@ -98,7 +99,7 @@ describe('outcomes, insights and ruleset versions', () => {
 
   it('publishes a proposal only as admin; a case ranked under N keeps N’s ranking after N+1; rollback works', async () => {
     await insertOutcomeRecords(t.db.db, generateOutcomes({ count: 600, seed: 3 }));
-    for (const who of [racer, shop]) expect((await who.post('/api/rulesets/:v/activate'.replace(':v', '1.0.0'))).status).toBe(403);
+    for (const who of [racer, shop]) expect((await who.post('/api/rulesets/:v/activate'.replace(':v', SHIPPED_RULESET_VERSION))).status).toBe(403);
     expect((await racer.post('/api/rulesets/proposals').send({ strength: 100, version: '1.1.0' })).status).toBe(403);
     const started = await shop.post('/api/rulesets/proposals').send({ strength: 100, version: '1.1.0', seed: 5 });
     expect(started.status).toBe(201);
@@ -117,19 +118,19 @@ describe('outcomes, insights and ruleset versions', () => {
     expect(published.body.status).toBe('published');
     expect((await admin.get('/api/rulesets')).body.active).toBe('1.1.0');
     expect((await t.http.get('/api/catalog')).body.version).toBe('1.1.0');
-    // The old case still shows what version 1.0.0 said, and takes further steps under 1.0.0.
+    // The old case still shows what the shipped version said, and takes further steps under it.
     const old: CaseDto = (await racer.get(`/api/cases/${c.id}`)).body;
-    expect(old.rulesetVersion).toBe('1.0.0');
+    expect(old.rulesetVersion).toBe(SHIPPED_RULESET_VERSION);
     expect(old.openingRank).toEqual(c.openingRank);
     const step: CaseDto = (await racer.post(`/api/cases/${c.id}/results`).send({ checkId: old.rank.plan[0].checkId, result: 'looks-fine' })).body;
-    expect(step.rank.version).toBe('1.0.0');
+    expect(step.rank.version).toBe(SHIPPED_RULESET_VERSION);
     const fresh: CaseDto = (await racer.post('/api/cases').send({ kartId, symptoms: ['hesitation'] })).body;
     expect(fresh.rulesetVersion).toBe('1.1.0');
     // Versions are immutable: the same proposal cannot be published twice.
     expect((await admin.post(`/api/rulesets/proposals/${ready.id}/publish`).send({})).status).toBe(409);
     // Roll back.
-    expect((await admin.post('/api/rulesets/1.0.0/activate')).body).toEqual({ active: '1.0.0' });
-    expect((await t.http.get('/api/catalog')).body.version).toBe('1.0.0');
+    expect((await admin.post(`/api/rulesets/${SHIPPED_RULESET_VERSION}/activate`)).body).toEqual({ active: SHIPPED_RULESET_VERSION });
+    expect((await t.http.get('/api/catalog')).body.version).toBe(SHIPPED_RULESET_VERSION);
     expect((await admin.post('/api/rulesets/9.9.9/activate')).status).toBe(404);
   });
 });

@@ -3,9 +3,9 @@
  * up for the arithmetic; they are not trade knowledge.
  */
 import type { RulesetSource } from '../model.js';
-import { SHIPPED_RULESET_SOURCES } from '../ruleset.js';
+import { SHIPPED_RULESET_SOURCES, SHIPPED_RULESET_VERSION } from '../ruleset.js';
 
-const shipped = SHIPPED_RULESET_SOURCES['1.0.0'].catalog as { cautions: unknown[]; groups: unknown[] };
+const shipped = SHIPPED_RULESET_SOURCES[SHIPPED_RULESET_VERSION].catalog as { cautions: unknown[]; groups: unknown[] };
 
 export function tinyCatalog(): Record<string, any> {
   return {

@@ -123,7 +123,7 @@ describe('sharing a case with a coach', () => {
     expect((await coach.delete(`/api/shares/${active.id}`)).status).toBe(404);
   });
 
-  it('an invitee without an account signs up through the link, becomes a coach and sees the case', async () => {
+  it('an invitee without an account signs up through the link as a racer account and reviews the case end to end', async () => {
     const mail = (await flushMail(t)).find((m) => m.to.includes('new.coach@example.test'))!;
     const token = linkToken(mail, '/invitations/');
     const agent = request.agent(t.app.getHttpServer());
@@ -132,8 +132,43 @@ describe('sharing a case with a coach', () => {
     expect(wrong.body.fields.email[0]).toMatch(/new.coach@example.test/);
     const res = await agent.post('/api/auth/sign-up').send({ email: 'new.coach@example.test', password: 'a long password here', displayName: 'New Coach', invitationToken: token });
     expect(res.status).toBe(201);
-    expect(res.body.user).toMatchObject({ role: 'coach', emailVerified: true });
-    expect((await agent.get(`/api/cases/${c.id}`)).status).toBe(200);
+    // Every new account is a racer account (only an admin changes roles); the share lets it review.
+    expect(res.body.user).toMatchObject({ role: 'racer', emailVerified: true });
+    const seen: CaseDto = (await agent.get(`/api/cases/${c.id}`)).body;
+    expect(seen.id).toBe(c.id);
+    expect((await agent.get('/api/shared-cases')).body.cases.map((x: { id: string }) => x.id)).toEqual([c.id]);
+    const comment = await agent.post(`/api/cases/${c.id}/comments`).send({ body: 'Send me the plug colour too' });
+    expect(comment.status).toBe(201);
+    expect(comment.body).toMatchObject({ authorName: 'New Coach', authorRole: 'racer' });
+    const check = seen.rank.plan.at(-1)!.checkId;
+    const recommended = await agent.post(`/api/cases/${c.id}/recommendations`).send({ checkId: check, reason: 'Rule this out first' });
+    expect(recommended.status).toBe(200);
+    expect(recommended.body.rank.plan[0]).toMatchObject({ checkId: check, recommendation: { byName: 'New Coach' } });
+    expect((await agent.post(`/api/cases/${c.id}/photo-requests`).send({ what: 'The plug, out of the head' })).status).toBe(201);
+    // Still read-only for the facts.
+    expect((await agent.post(`/api/cases/${c.id}/results`).send({ checkId: check, result: 'looks-fine' })).status).toBe(404);
+  });
+
+  it('a racer cannot invite a second address of their own into a shop account', async () => {
+    const invite = await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'my.other.address@example.test', as: 'shop' });
+    expect(invite.status).toBe(201);
+    const mail = (await flushMail(t)).find((m) => m.to.includes('my.other.address@example.test'))!;
+    const alt = request.agent(t.app.getHttpServer());
+    const res = await alt
+      .post('/api/auth/sign-up')
+      .send({ email: 'my.other.address@example.test', password: 'a long password here', displayName: 'Alt', invitationToken: linkToken(mail, '/invitations/') });
+    expect(res.status).toBe(201);
+    expect(res.body.user.role).toBe('racer');
+    expect((await alt.get('/api/auth/me')).body.user.role).toBe('racer');
+    // None of the shop's powers: insights, work orders, the outcome list, rulesets and refinement.
+    expect((await alt.get('/api/insights')).status).toBe(403);
+    expect((await alt.get('/api/work-orders')).status).toBe(403);
+    expect((await alt.get('/api/outcomes')).status).toBe(403);
+    expect((await alt.post('/api/rulesets/proposals').send({})).status).toBe(403);
+    // The share itself works, labelled as the racer chose.
+    expect((await alt.get(`/api/cases/${c.id}`)).status).toBe(200);
+    const share = (await racer.get(`/api/shares?caseId=${c.id}`)).body.shares.find((x: { inviteeEmail: string }) => x.inviteeEmail === 'my.other.address@example.test');
+    expect(share).toMatchObject({ as: 'shop', status: 'active' });
   });
 
   it('refuses bad share requests, naming the field', async () => {

@@ -5,7 +5,6 @@ import { ThrottlerGuard } from '@nestjs/throttler';
 import { IsOptional, IsUUID } from 'class-validator';
 import type { AcceptInvitationResponse, CaseDto, CommentDto, PhotoRequestDto, ShareDto, ShareListResponse, SharedCaseSummaryDto } from '@fuelwright/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { Roles } from '../common/decorators/roles.decorator.js';
 import { UuidParam } from '../common/uuid-param.js';
 import type { SessionUser } from '../common/session-user.js';
 import { AcceptInvitationDto, CreateCommentDto, CreateShareDto, RecommendCheckDto, RequestPhotoDto } from './dto/sharing.dto.js';
@@ -53,8 +52,8 @@ export class SharingController {
     return this.commands.execute(new AcceptInvitationCommand(user, dto.token));
   }
 
+  /** Any account that accepted a share: the share grants access, not the role. */
   @Get('shared-cases')
-  @Roles('coach', 'shop')
   async sharedCases(@CurrentUser() user: SessionUser): Promise<{ cases: SharedCaseSummaryDto[] }> {
     return { cases: await this.queries.execute(new ListSharedCasesQuery(user)) };
   }

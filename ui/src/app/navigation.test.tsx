@@ -10,7 +10,8 @@ import { menuItemsFor } from './navigation';
 // each must show (in this order) for its role and none of the other roles' entries may.
 const SHOWS: Record<Role | 'visitor', string[]> = {
   visitor: ['Quick diagnosis'],
-  racer: ['Home', 'Karts', 'Cases', 'Quick diagnosis'],
+  // A racer account may be a coach's or a shop's that accepted an invitation: shared cases are reachable.
+  racer: ['Home', 'Karts', 'Cases', 'Shared cases', 'Quick diagnosis'],
   coach: ['Home', 'Shared cases', 'Quick diagnosis'],
   shop: ['Home', 'Shared cases', 'Work orders', 'Outcomes', 'Quick diagnosis'],
   admin: ['Home', 'Users', 'Outcomes', 'Rulesets', 'Quick diagnosis'],

@@ -134,9 +134,10 @@ export const appRoutes: readonly AppRoute[] = [
   {
     path: paths.sharedCases,
     title: 'Shared cases',
-    access: ['coach', 'shop'],
+    // The share grants access, not the role: an invited coach may have a racer account.
+    access: 'signed-in',
     page: () => import('../features/review/components/shared-cases-page').then((m) => m.SharedCasesPage),
-    menu: { icon: FolderSharedIcon, order: 20 },
+    menu: { icon: FolderSharedIcon, order: 20, roles: ['racer', 'coach', 'shop'] },
   },
   {
     path: paths.workOrders,

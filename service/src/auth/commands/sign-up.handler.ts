@@ -14,9 +14,11 @@ import { toUserDto } from '../user-dto.js';
 import { SignUpCommand } from './sign-up.command.js';
 
 /**
- * New accounts are racers and get an e-mail to verify their address. Signing up through an
- * invitation link proves the address, gives the account the role the inviter named (coach or shop)
- * and the share, all in one transaction.
+ * New accounts are always racers (only an admin changes a role) and get an e-mail to verify their
+ * address. Signing up through an invitation link proves the address and gives the account the
+ * share, in one transaction; the share, not a role, lets it review what was shared (the inviter's
+ * "as coach" or "as shop" only labels the share, so nobody gains shop powers by inviting a second
+ * address of their own).
  */
 @CommandHandler(SignUpCommand)
 export class SignUpHandler implements ICommandHandler<SignUpCommand> {
@@ -36,14 +38,14 @@ export class SignUpHandler implements ICommandHandler<SignUpCommand> {
     const email = cmd.email.trim().toLowerCase();
     const passwordHash = await hashPassword(cmd.password);
     const row = await this.db.transaction(async (tx) => {
-      let invitation: { shareId: string; role: 'coach' | 'shop' } | undefined;
+      let invitation: { shareId: string } | undefined;
       if (cmd.invitationToken) {
         const t = await this.tokens.consume(tx, 'invitation', cmd.invitationToken);
         if (!t?.shareId) throw new FieldsBadRequest({ invitationToken: ['this invitation link has expired, was already used, or was withdrawn'] });
         if (t.email !== email) throw new FieldsBadRequest({ email: [`use the address the invitation was sent to (${t.email})`] });
         const [s] = await tx.select().from(shares).where(eq(shares.id, t.shareId));
         if (!s || s.revokedAt) throw new FieldsBadRequest({ invitationToken: ['this invitation was withdrawn'] });
-        invitation = { shareId: s.id, role: s.inviteeRole === 'shop' ? 'shop' : 'coach' };
+        invitation = { shareId: s.id };
       }
       const [inserted] = await tx
         .insert(users)
@@ -51,7 +53,7 @@ export class SignUpHandler implements ICommandHandler<SignUpCommand> {
           email,
           displayName: cmd.displayName.trim(),
           passwordHash,
-          role: invitation?.role ?? 'racer',
+          role: 'racer',
           emailVerifiedAt: invitation ? new Date() : null,
         })
         .onConflictDoNothing({ target: users.email })

@@ -16,7 +16,8 @@ describe('access policy matrix', () => {
       it(`${role} as owner may ${action}`, () => {
         expect(isAllowed({ id: OWNER, role }, resource, action)).toBe(true);
       });
-      const sharedExpected = (role === 'coach' || role === 'shop') && readOnly.includes(action);
+      // The share grants, not the role: an invited coach's account may well be a racer account.
+      const sharedExpected = readOnly.includes(action);
       it(`${role} shared-with ${sharedExpected ? 'may' : 'may not'} ${action}`, () => {
         expect(isAllowed({ id: FRIEND, role }, resource, action)).toBe(sharedExpected);
       });
@@ -26,8 +27,12 @@ describe('access policy matrix', () => {
     }
   }
 
-  it('a share given to a racer grants nothing (shares are for coaches and shops)', () => {
-    expect(relationOf({ id: FRIEND, role: 'racer' }, resource)).toBe('other');
+  it('a share accepted by an account of any role makes it "shared"; the role alone makes nobody "shared"', () => {
+    for (const role of ROLES) {
+      expect(relationOf({ id: FRIEND, role }, resource)).toBe('shared');
+      expect(relationOf({ id: STRANGER, role }, resource)).toBe('other');
+    }
+    expect(relationOf({ id: FRIEND, role: 'coach' }, { ownerId: OWNER })).toBe('other');
   });
 
   it('answers 404, not 403, when access is refused or the item does not exist', () => {

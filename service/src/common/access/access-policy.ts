@@ -13,10 +13,13 @@ export type Action = (typeof ACTIONS)[number];
 
 /**
  * The one access policy, used by every handler that touches a kart or a case.
- * Owners do everything. Someone the owner shared with (a coach or a shop) may look, comment,
- * recommend a check and log an outcome, never change the facts. Everyone else sees nothing: the
- * item answers 404, so its existence does not leak. Roles do not widen this: an admin manages
- * users and rulesets, not other people's karts.
+ * Owners do everything. Someone who accepted the owner's share (the coach or shop the owner
+ * invited) may look, comment, recommend a check and log an outcome, never change the facts. The
+ * share alone grants this, whatever the account's role: an invited coach or shop signs up as a
+ * racer account (only an admin changes roles), so roles can neither be gained through an
+ * invitation nor be needed to review. Everyone else sees nothing: the item answers 404, so its
+ * existence does not leak. Roles do not widen this: an admin manages users and rulesets, not
+ * other people's karts.
  */
 const ALLOWED: Record<Relation, ReadonlySet<Action>> = {
   owner: new Set(ACTIONS),
@@ -31,13 +34,13 @@ export interface Subject {
 
 export interface Resource {
   ownerId: string;
-  /** User ids the owner shared this item with (filled in by sharing, a later feature). */
+  /** User ids that accepted an active share of this item (kart or case scope). */
   sharedWith?: readonly string[];
 }
 
 export function relationOf(subject: Subject, resource: Resource): Relation {
   if (resource.ownerId === subject.id) return 'owner';
-  if (resource.sharedWith?.includes(subject.id) && (subject.role === 'coach' || subject.role === 'shop')) return 'shared';
+  if (resource.sharedWith?.includes(subject.id)) return 'shared';
   return 'other';
 }
 

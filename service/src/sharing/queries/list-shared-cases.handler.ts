@@ -5,13 +5,12 @@ import { cases, karts, shares, users, type Db } from '@fuelwright/db';
 import { DB } from '../../database/database.tokens.js';
 import { ListSharedCasesQuery } from './review.queries.js';
 
-/** Cases shared with a coach or shop, directly or through their kart: open first, newest change first. */
+/** Cases shared with the user (whatever their role), directly or through their kart: open first, newest change first. */
 @QueryHandler(ListSharedCasesQuery)
 export class ListSharedCasesHandler implements IQueryHandler<ListSharedCasesQuery> {
   constructor(@Inject(DB) private readonly db: Db) {}
 
   async execute({ user }: ListSharedCasesQuery) {
-    if (user.role !== 'coach' && user.role !== 'shop') return [];
     const shared = this.db
       .select({ caseId: cases.id })
       .from(cases)

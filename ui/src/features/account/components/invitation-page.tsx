@@ -10,12 +10,11 @@ import { useCurrentUser } from '../../../lib/current-user';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import '../account.css';
 
-const ROLE_NAMES: Record<string, string> = { racer: 'racer', coach: 'coach', shop: 'shop', admin: 'admin' };
-
 /**
  * The link in an invitation e-mail. A visitor signs in (and comes back here) or creates an account
- * through the invitation (the account gets the role the racer chose and the share at once). A
- * signed-in user accepts, and goes to the shared case (or kart).
+ * through the invitation (a racer account, like every new one, with the share at once: the share,
+ * not a role, lets it review). A signed-in user of any role accepts, and goes to the shared case
+ * (or kart).
  */
 export function InvitationPage() {
   const { token = '' } = useParams();
@@ -37,8 +36,7 @@ export function InvitationPage() {
         <Card className="fw-form-card fw-account-card">
           <H2 className="fw-account-title">New to Fuelwright?</H2>
           <p className="fw-muted">
-            Create your account with the address the invitation was sent to. It becomes a coach or shop account, as the racer chose,
-            with the shared case ready.
+            Create your account with the address the invitation was sent to. The shared case is ready in it, under Shared cases.
           </p>
           <LinkButton className="fw-touch" size="large" fill icon={<NewPersonIcon />} to={invitationSignUpPath(token)} text="Create an account" />
         </Card>
@@ -46,7 +44,6 @@ export function InvitationPage() {
     );
   }
 
-  const canReview = user.role === 'coach' || user.role === 'shop';
   const tokenError = isApiError(accept.error) ? (accept.error.fieldErrors('token')[0] ?? accept.error.message) : accept.error?.message;
 
   const onAccept = () =>
@@ -68,19 +65,13 @@ export function InvitationPage() {
         <p>
           Signed in as <strong className="fw-break">{user.displayName}</strong> <span className="fw-muted fw-break">({user.email})</span>.
         </p>
-        {!canReview && (
-          <Callout intent="warning" className="fw-form-note" title="This account cannot review cases">
-            Shared cases open for coach and shop accounts; this is a {ROLE_NAMES[user.role] ?? user.role} account. If the invitation
-            went to another address, sign out and sign in with that one (or create an account with it).
-          </Callout>
-        )}
         {tokenError && (
           <Callout intent="danger" className="fw-form-error" role="alert" title="The invitation could not be accepted">
             {tokenError.charAt(0).toUpperCase() + tokenError.slice(1)}. Ask the racer to share it again.
           </Callout>
         )}
         {accept.isError ? (
-          <LinkButton className="fw-touch" size="large" fill to={canReview ? paths.sharedCases : paths.home} text={canReview ? 'Go to shared cases' : 'Go home'} />
+          <LinkButton className="fw-touch" size="large" fill to={paths.sharedCases} text="Go to shared cases" />
         ) : (
           <Button className="fw-touch" size="large" intent="primary" fill icon={<TickIcon />} text="Accept the invitation" loading={accept.isPending} onClick={onAccept} />
         )}

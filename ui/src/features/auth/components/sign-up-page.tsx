@@ -20,7 +20,7 @@ export function SignUpPage() {
   const [password, setPassword] = useState('');
   const signUp = useSignUp();
   const next = useNextPath();
-  // Signing up through an invitation link: the account gets the invited role and the share.
+  // Signing up through an invitation link: a racer account, like every new one, with the share (which lets it review).
   const invitationToken = useSearchParams()[0].get(INVITATION_PARAM) || undefined;
   const errors = formErrors(signUp.error, FIELDS);
 
@@ -34,8 +34,8 @@ export function SignUpPage() {
       <Card className="fw-form-card">
         {invitationToken && (
           <Callout className="fw-form-note" intent="primary" compact>
-            You were invited to review a case. Use the address the invitation was sent to: the account becomes a coach or shop
-            account, with the shared case ready.
+            You were invited to review a case. Use the address the invitation was sent to: the shared case is ready in your new
+            account, under Shared cases.
           </Callout>
         )}
         <form onSubmit={submit} noValidate aria-label="Create account">

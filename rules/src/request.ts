@@ -14,6 +14,8 @@ import {
   SETUP_RANGES,
   THROTTLE_BANDS,
   TRACK_POSITIONS,
+  isCalendarDate,
+  isNotInFuture,
   type CheckResultValue,
   type DiagnosisConditions,
   type NumericRange,
@@ -35,7 +37,10 @@ const ranged = (r: NumericRange) =>
 const isoDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}(T[0-9:.]+(Z|[+-]\d{2}:\d{2})?)?$/, 'must be an ISO date (YYYY-MM-DD)')
-  .refine((s) => !Number.isNaN(Date.parse(s)), 'must be a real date');
+  .refine((s) => isCalendarDate(s.slice(0, 10)) && !Number.isNaN(Date.parse(s)), 'must be a real date');
+
+/** A date the racer looks back on (foam fitted, last rebuild): not later than today where they are. */
+const pastDate = isoDate.refine((s) => isNotInFuture(s), 'must not be in the future');
 
 const oneOrMany = <const T extends readonly [string, ...string[]]>(values: T) =>
   z.union([z.enum(values), z.array(z.enum(values)).min(1).max(values.length)], { error: `must be one or more of ${values.join(', ')}` });
@@ -63,8 +68,8 @@ export const setupSchema = z.strictObject({
   airScrewTurnsOut: ranged(SETUP_RANGES.airScrewTurnsOut),
   idleScrew: z.enum(IDLE_SCREW_STATES).nullish(),
   idleScrewTurns: ranged(SETUP_RANGES.idleScrewTurns),
-  foamFittedDate: isoDate.nullish(),
-  lastRebuildDate: isoDate.nullish(),
+  foamFittedDate: pastDate.nullish(),
+  lastRebuildDate: pastDate.nullish(),
   premixRatio: ranged(SETUP_RANGES.premixRatio),
   ventLinesFitted: z.boolean().nullish(),
   ventLinesRoutedUp: z.boolean().nullish(),

@@ -136,6 +136,15 @@ describe('diagnosis contract over HTTP', () => {
     expect(Object.keys(bad.body.fields).some((f) => f.startsWith('symptoms.0'))).toBe(true);
   });
 
+  it('answers 400 naming the field for a foam-fitted or rebuild date in the future, like the setup form', async () => {
+    const future = new Date(Date.now() + 3 * 24 * 3600 * 1000).toISOString().slice(0, 10);
+    const res = await t.http.post(RANK).send({ symptoms: ['sporadic-running'], setup: { foamFittedDate: future, lastRebuildDate: future } });
+    expect(res.status).toBe(400);
+    expect(res.body.fields).toEqual({ 'setup.foamFittedDate': [expect.stringMatching(/future/)], 'setup.lastRebuildDate': [expect.stringMatching(/future/)] });
+    const today = new Date().toISOString().slice(0, 10);
+    expect((await t.http.post(RANK).send({ symptoms: ['sporadic-running'], setup: { foamFittedDate: today, lastRebuildDate: '2025-06-01' } })).status).toBe(200);
+  });
+
   it('describes both routes in the OpenAPI document', async () => {
     const res = await t.http.get('/api/docs/openapi.json');
     expect(res.status).toBe(200);

@@ -2,6 +2,7 @@ export * from './auth.js';
 export * from './errors.js';
 export * from './karts.js';
 export * from './setup.js';
+export * from './calendar-date.js';
 export * from './diagnosis.js';
 export * from './air/index.js';
 export * from './units/index.js';

@@ -47,6 +47,12 @@ describe('sharing a case with a coach', () => {
   it('lets the coach accept once; the case then opens for the coach, read-only', async () => {
     const mail = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
     const token = linkToken(mail, '/invitations/');
+    // Only the invited address may accept: the shop holding a forwarded link gets a named 400 and
+    // the link stays usable for the coach.
+    const forwarded = await shop.post('/api/invitations/accept').send({ token });
+    expect(forwarded.status).toBe(400);
+    expect(forwarded.body.fields.token[0]).toMatch(/sent to coach@fuelwright.test/);
+    expect((await shop.get(`/api/cases/${c.id}`)).status).toBe(404);
     const accepted = await coach.post('/api/invitations/accept').send({ token });
     expect(accepted.status).toBe(200);
     expect(accepted.body).toMatchObject({ caseId: c.id, share: { status: 'active', granteeName: 'Marit Quayle' } });

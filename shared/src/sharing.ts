@@ -12,7 +12,7 @@ export interface CreateShareRequest {
   kartId?: string;
   caseId?: string;
   email: string;
-  /** The role the invitee has for you; an account created through the invitation gets it. */
+  /** What the invitee is to you, shown on the share; it gives no account role (new accounts are racers). */
   as: 'coach' | 'shop';
 }
 
@@ -126,13 +126,14 @@ export interface SharedCaseSummaryDto {
   pendingPhotoRequests: number;
 }
 
-export const NOTICE_KINDS = ['invitation', 'comment', 'check-recommended', 'photo-requested', 'case-resolved'] as const;
+export const NOTICE_KINDS = ['invitation', 'comment', 'check-recommended', 'photo-requested', 'photo-added', 'case-resolved'] as const;
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 export const NOTICE_LABELS: Record<NoticeKind, string> = {
   invitation: 'Invitations to review a case',
   comment: 'New comments on a case',
   'check-recommended': 'A check recommended on your case',
   'photo-requested': 'A photo requested on your case',
+  'photo-added': 'A photo added to a case',
   'case-resolved': 'A shared case resolved',
 };
 

@@ -1,5 +1,7 @@
-import { describe, expect, it } from 'vitest';
-import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq, sql } from 'drizzle-orm';
+import { PGlite } from '@electric-sql/pglite';
+import { PGLiteSocketServer } from '@electric-sql/pglite-socket';
 import { openDatabase } from './client.js';
 import { karts, users } from './schema/index.js';
 import { readDemoFixture, seedDemoIfEmpty } from './seed.js';
@@ -36,4 +38,51 @@ describe('database client and demo seed', () => {
       await handle.close();
     }
   }, 30_000);
+});
+
+// The DATABASE_URL path (node-postgres) against a PostgreSQL wire-protocol server: an in-memory
+// PGlite served on loopback by @electric-sql/pglite-socket, so no PostgreSQL binary is needed.
+// The socket server takes one connection at a time, hence a pool of one.
+describe('database client over a PostgreSQL URL (node-postgres driver)', () => {
+  let server: PGLiteSocketServer;
+  let engine: PGlite;
+  let url: string;
+  beforeAll(async () => {
+    engine = await PGlite.create();
+    server = new PGLiteSocketServer({ db: engine, host: '127.0.0.1', port: 0 });
+    await server.start();
+    url = `postgres://postgres@${server.getServerConn()}/postgres`;
+  }, 30_000);
+  afterAll(async () => {
+    await server.stop();
+    await engine.close();
+  });
+
+  it('applies the real migrations, writes and reads through the pool, and the rows are on the server', async () => {
+    const handle = await openDatabase({ databaseUrl: url, poolMax: 1 });
+    try {
+      expect(handle.kind).toBe('postgres');
+      expect(handle.pglite).toBeUndefined();
+      await handle.migrate();
+      // Applying them again is a no-op (the journal in the server says they are done).
+      await handle.migrate();
+      const [written] = await handle.db
+        .insert(users)
+        .values({ email: 'url-path@fuelwright.test', passwordHash: 'hashed:x', displayName: 'Url Path', role: 'coach' })
+        .returning();
+      const [read] = await handle.db.select().from(users).where(eq(users.id, written.id));
+      expect(read.email).toBe('url-path@fuelwright.test');
+      expect(read.role).toBe('coach');
+      // The shared Db type leaves execute() untyped; node-postgres answers with { rows }.
+      const migrated = (await handle.db.execute(sql`select count(*)::int as n from drizzle.__drizzle_migrations`)) as unknown as {
+        rows: { n: number }[];
+      };
+      expect(migrated.rows[0].n).toBeGreaterThan(0);
+    } finally {
+      await handle.close();
+    }
+    // Seen by the engine behind the socket, not only by the pool that wrote it.
+    const direct = await engine.query<{ email: string }>('select email from users');
+    expect(direct.rows.map((r) => r.email)).toEqual(['url-path@fuelwright.test']);
+  }, 60_000);
 });

@@ -19,6 +19,8 @@ export const MIGRATIONS_FOLDER = fileURLToPath(new URL('../migrations', import.m
 export interface OpenDatabaseOptions {
   /** A PostgreSQL server (node-postgres). When set, `dataDir` and `memory` are ignored. */
   databaseUrl?: string;
+  /** Most connections the node-postgres pool opens (default 10); only with `databaseUrl`. */
+  poolMax?: number;
   /** Folder for the embedded PGlite database; created when missing. */
   dataDir?: string;
   /** An in-memory PGlite database (tests). */
@@ -42,7 +44,7 @@ export interface DatabaseHandle {
  */
 export async function openDatabase(options: OpenDatabaseOptions): Promise<DatabaseHandle> {
   if (options.databaseUrl) {
-    const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 });
+    const pool = new pg.Pool({ connectionString: options.databaseUrl, max: options.poolMax ?? 10 });
     const db = drizzlePg(pool, { schema, casing: 'snake_case' });
     return {
       db: db as unknown as Db,

@@ -96,3 +96,74 @@ describe('photos of a case', () => {
     expect(requests[0].fulfilledByPhotoId).toBe(res.body.id);
   });
 });
+
+describe('e-mail about a new photo', () => {
+  let t: TestApp;
+  let racer: Agent;
+  let coach: Agent;
+  let c: CaseDto;
+  let other: CaseDto;
+  const png = () => sharp({ create: { width: 40, height: 40, channels: 3, background: '#606060' } }).png().toBuffer();
+  const share = async (caseId: string) => {
+    const before = (await flushMail(t)).length;
+    await racer.post('/api/shares').send({ scope: 'case', caseId, email: 'coach@fuelwright.test', as: 'coach' });
+    const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes('coach@fuelwright.test'))!;
+    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+  };
+  beforeAll(async () => {
+    t = await createTestApp();
+    racer = await signedIn(t, demoUser('racer'));
+    coach = await signedIn(t, demoUser('coach'));
+    const kartId = (await racer.get('/api/karts')).body.karts[0].id;
+    c = (await racer.post('/api/cases').send({ kartId, symptoms: ['bog-on-acceleration'] })).body;
+    other = (await racer.post('/api/cases').send({ kartId, symptoms: ['hesitation'] })).body;
+    await share(c.id);
+    await share(other.id);
+  });
+  afterAll(() => t.close());
+
+  it('tells the coach who asked for the photo, with a link to the case, and moves the case up the dashboard', async () => {
+    const dashboard = async () => ((await coach.get('/api/shared-cases')).body.cases as { id: string }[]).map((x) => x.id).filter((id) => id === c.id || id === other.id);
+    expect(await dashboard()).toEqual([other.id, c.id]);
+    const asked = (await coach.post(`/api/cases/${c.id}/photo-requests`).send({ what: 'The foam filter, dry' })).body;
+    const before = (await flushMail(t)).length;
+    const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', await png(), { filename: 'foam.png', contentType: 'image/png' }).field('photoRequestId', asked.id).field('caption', 'Foam <dry>');
+    expect(res.status).toBe(201);
+    const mails = (await flushMail(t)).slice(before);
+    expect(mails.map((m) => m.to)).toEqual([['coach@fuelwright.test']]);
+    const [m] = mails;
+    expect(m.headers['x-fuelwright-kind']).toBe('photo-added');
+    expect(m.subject).toBe('Tamsin Vell sent the photo you asked for on "' + c.kartName + '"');
+    expect(m.text).toContain('answered your request for a photo of: The foam filter, dry');
+    expect(m.text).toContain('Caption: Foam <dry>');
+    expect(m.text).toContain(`Open the case: http://fuelwright.test/cases/${c.id}`);
+    expect(m.text).toMatch(/Stop these e-mails: http:\/\/fuelwright\.test\/unsubscribe\?token=/);
+    expect(m.html).toContain('Caption: Foam &lt;dry&gt;');
+    expect(m.html).toContain(`href="http://fuelwright.test/cases/${c.id}"`);
+    expect(await dashboard()).toEqual([c.id, other.id]);
+  });
+
+  it('tells the racer when the coach adds a photo, and not the coach who added it', async () => {
+    const before = (await flushMail(t)).length;
+    expect((await coach.post(`/api/cases/${other.id}/photos`).attach('file', await png(), { filename: 'x.png', contentType: 'image/png' })).status).toBe(201);
+    const mails = (await flushMail(t)).slice(before);
+    expect(mails.map((m) => m.to)).toEqual([['racer@fuelwright.test']]);
+    expect(mails[0].subject).toBe(`Marit Quayle added a photo to the case of "${other.kartName}"`);
+  });
+
+  it('follows the per-user setting and the unsubscribe link for photo notices', async () => {
+    let before = (await flushMail(t)).length;
+    await racer.post(`/api/cases/${c.id}/photos`).attach('file', await png(), { filename: 'x.png', contentType: 'image/png' });
+    const notice = (await flushMail(t)).slice(before)[0];
+    const token = decodeURIComponent(linkToken(notice, '/unsubscribe?token='));
+    expect((await t.http.post('/api/notifications/unsubscribe').send({ token })).body).toEqual({ kind: 'photo-added' });
+    expect((await coach.get('/api/me/notifications')).body.notices).toEqual({ 'photo-added': false });
+    before = (await flushMail(t)).length;
+    expect((await racer.post(`/api/cases/${c.id}/photos`).attach('file', await png(), { filename: 'x.png', contentType: 'image/png' })).status).toBe(201);
+    expect((await flushMail(t)).length).toBe(before);
+    expect((await coach.put('/api/me/notifications').send({ 'photo-added': true })).body.notices).toEqual({ 'photo-added': true });
+    await racer.post(`/api/cases/${c.id}/photos`).attach('file', await png(), { filename: 'x.png', contentType: 'image/png' });
+    expect((await flushMail(t)).length).toBe(before + 1);
+    expect((await coach.put('/api/me/notifications').send({ 'photo-added': 'off' })).body.fields['photo-added']).toBeDefined();
+  });
+});

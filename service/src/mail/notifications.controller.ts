@@ -14,6 +14,7 @@ export class NoticeSettingsDto implements NoticeSettings {
   @ApiPropertyOptional() @IsOptional() @IsBoolean(msg('comment')) comment?: boolean;
   @ApiPropertyOptional({ name: 'check-recommended' }) @IsOptional() @IsBoolean(msg('check-recommended')) 'check-recommended'?: boolean;
   @ApiPropertyOptional({ name: 'photo-requested' }) @IsOptional() @IsBoolean(msg('photo-requested')) 'photo-requested'?: boolean;
+  @ApiPropertyOptional({ name: 'photo-added' }) @IsOptional() @IsBoolean(msg('photo-added')) 'photo-added'?: boolean;
   @ApiPropertyOptional({ name: 'case-resolved' }) @IsOptional() @IsBoolean(msg('case-resolved')) 'case-resolved'?: boolean;
 }
 

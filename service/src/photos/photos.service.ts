@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { BadRequestException, HttpException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { and, asc, count, eq, isNull } from 'drizzle-orm';
-import { photoRequests, photos, users, type Db } from '@fuelwright/db';
+import { cases, photoRequests, photos, users, type Db } from '@fuelwright/db';
 import type { PhotoDto } from '@fuelwright/shared';
 import { DB } from '../database/database.tokens.js';
 import { AccessPolicy } from '../common/access/access-policy.js';
@@ -9,6 +10,9 @@ import { FieldsBadRequest } from '../common/validation.js';
 import type { SessionUser } from '../common/session-user.js';
 import { CaseStore } from '../cases/case-store.js';
 import { CaseRanking } from '../cases/case-ranking.js';
+import { CaseAudience, type Recipient } from '../cases/case-audience.js';
+import type { AppConfig } from '../config/app.config.js';
+import { MailService } from '../mail/mail.service.js';
 import { PhotoRejected, PHOTOS_PER_CASE, processPhoto } from './image-processing.js';
 import { PhotoStorage } from './photo-storage.js';
 
@@ -25,15 +29,27 @@ export interface UploadMeta {
   photoRequestId?: string;
 }
 
+/** Who hears about a new photo: the one who asked for it first, then everyone else who can see the case. */
+function orderRecipients(to: Recipient[], requestedBy: string | null | undefined): Recipient[] {
+  return [...to].sort((a, b) => Number(b.id === requestedBy) - Number(a.id === requestedBy));
+}
+
 @Injectable()
 export class PhotosService {
+  private readonly publicUrl: string;
+
   constructor(
     @Inject(DB) private readonly db: Db,
     private readonly storage: PhotoStorage,
     private readonly store: CaseStore,
     private readonly ranking: CaseRanking,
     private readonly access: AccessPolicy,
-  ) {}
+    private readonly audience: CaseAudience,
+    private readonly mail: MailService,
+    config: ConfigService,
+  ) {
+    this.publicUrl = config.getOrThrow<AppConfig>('app').publicUrl;
+  }
 
   private async caseFor(user: SessionUser, caseId: string, action: 'view' | 'comment') {
     const loaded = await this.store.load(caseId);
@@ -47,9 +63,10 @@ export class PhotosService {
     if (!file) throw new FieldsBadRequest({ file: ['file must be a photo (JPEG, PNG or WebP), sent as multipart form data'] });
     if (meta.checkId && !this.ranking.checkLabel(meta.checkId, c.row.rulesetVersion)) throw new FieldsBadRequest({ checkId: [`unknown check "${meta.checkId}"`] });
     if (meta.caption && meta.caption.length > 300) throw new FieldsBadRequest({ caption: ['caption must be at most 300 characters'] });
+    let request: { what: string; requestedBy: string | null } | undefined;
     if (meta.photoRequestId) {
-      const [r] = await this.db.select().from(photoRequests).where(and(eq(photoRequests.id, meta.photoRequestId), eq(photoRequests.caseId, caseId)));
-      if (!r) throw new FieldsBadRequest({ photoRequestId: ['no such photo request on this case'] });
+      [request] = await this.db.select().from(photoRequests).where(and(eq(photoRequests.id, meta.photoRequestId), eq(photoRequests.caseId, caseId)));
+      if (!request) throw new FieldsBadRequest({ photoRequestId: ['no such photo request on this case'] });
     }
     const [{ n }] = await this.db.select({ n: count() }).from(photos).where(eq(photos.caseId, caseId));
     if (n >= PHOTOS_PER_CASE) throw new BadRequestException(`A case holds at most ${PHOTOS_PER_CASE} photos.`);
@@ -60,6 +77,7 @@ export class PhotosService {
       if (e instanceof PhotoRejected) throw new HttpException({ message: e.message, fields: { file: [e.message] } }, e.status);
       throw e;
     }
+    const to = await this.audience.of({ caseId, kartId: c.row.kartId, ownerId: c.row.ownerId }, user.id);
     const id = randomUUID();
     const objectKey = `cases/${caseId}/${id}.${processed.format === 'jpeg' ? 'jpg' : processed.format}`;
     const thumbKey = `cases/${caseId}/${id}.thumb.webp`;
@@ -85,6 +103,26 @@ export class PhotosService {
             .update(photoRequests)
             .set({ fulfilledByPhotoId: id })
             .where(and(eq(photoRequests.id, meta.photoRequestId), isNull(photoRequests.fulfilledByPhotoId)));
+        }
+        // A new photo is a change: the coach's dashboard (newest change first) moves the case up.
+        await tx.update(cases).set({ updatedAt: new Date() }).where(eq(cases.id, caseId));
+        const caption = meta.caption?.trim() ?? '';
+        for (const r of orderRecipients(to, request?.requestedBy)) {
+          const answers = request && r.id === request.requestedBy;
+          await this.mail.enqueue(tx, {
+            kind: 'photo-added',
+            toEmail: r.email,
+            toUserId: r.id,
+            content: {
+              subject: answers ? `${user.displayName} sent the photo you asked for on "${c.kartName}"` : `${user.displayName} added a photo to the case of "${c.kartName}"`,
+              paragraphs: [
+                answers ? `${user.displayName} answered your request for a photo of: ${request!.what}` : `${user.displayName} added a photo to the case of "${c.kartName}".`,
+                ...(caption ? [`Caption: ${caption}`] : []),
+                'The photo itself is not attached: open the case to see it (you need to be signed in).',
+              ],
+              action: { label: 'Open the case', url: `${this.publicUrl}/cases/${caseId}` },
+            },
+          });
         }
       });
     } catch (e) {

@@ -1,4 +1,4 @@
-import { Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { Controller, Get, HttpCode, NotFoundException, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { desc } from 'drizzle-orm';
 import { Inject } from '@nestjs/common';
@@ -7,8 +7,13 @@ import type { OutboxMessageDto } from '@fuelwright/shared';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { DB } from '../database/database.tokens.js';
 import { MailService } from './mail.service.js';
+import { redactTokenLinks } from './redact-links.js';
 
-/** What the app sent (or is retrying), for the admin; in development the local capture server received it. */
+/**
+ * What the app sent (or is retrying), for the admin, while the local capture server stands in for
+ * a mail service (development, tests). With a real mail service the messages went to real inboxes
+ * and the list is not served (404); links that carry a token are hidden whenever the capture is off.
+ */
 @ApiTags('admin')
 @Roles('admin')
 @Controller('admin/outbox')
@@ -20,10 +25,14 @@ export class OutboxController {
 
   @Get()
   async list(): Promise<{ messages: OutboxMessageDto[]; capturing: boolean }> {
+    const capturing = Boolean(this.mail.capture);
+    if (!capturing) throw new NotFoundException('The outbox is shown only while the local mail capture is in use (development and tests).');
     const rows = await this.db.select().from(outbox).orderBy(desc(outbox.createdAt)).limit(200);
+    // Belt and braces: should the 404 above ever be relaxed, reading the outbox still grants no invitation, reset or verification.
+    const show = (m: OutboxMessageDto) => (capturing ? m : redactTokenLinks(m));
     return {
-      capturing: Boolean(this.mail.capture),
-      messages: rows.map((m) => ({
+      capturing,
+      messages: rows.map((m) => show({
         id: m.id,
         kind: m.kind,
         toEmail: m.toEmail,

@@ -9,7 +9,7 @@ export interface Outbox {
   messages: OutboxMessageDto[];
 }
 
-/** GET /api/admin/outbox (admin): what the app sent or is still retrying. */
+/** GET /api/admin/outbox (admin): what the app sent or is still retrying; 404 unless the local mail capture is in use. */
 export function getOutbox(signal?: AbortSignal): Promise<Outbox> {
   return api.get<Outbox>('/admin/outbox', { signal });
 }
@@ -20,8 +20,9 @@ export function getOutboxQueryOptions() {
   return queryOptions({
     queryKey: outboxQueryKey,
     queryFn: ({ signal }) => getOutbox(signal),
-    // The server sends what is due every few seconds: keep the page current while it is open.
-    refetchInterval: 5_000,
+    // The server sends what is due every few seconds: keep the page current while it is open
+    // (not when it is not served: a real mail service is configured).
+    refetchInterval: (query) => (query.state.error ? false : 5_000),
   });
 }
 

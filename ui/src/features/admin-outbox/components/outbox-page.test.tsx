@@ -52,6 +52,17 @@ describe('outbox (admin)', { timeout: 20_000 }, () => {
     expect(frame.getAttribute('srcdoc')).toContain('<a href="http://localhost/invitations/abc">link</a>');
   });
 
+  it('says the outbox is for development when the server does not serve it (a real mail service is configured)', async () => {
+    mockApi({
+      'GET /auth/me': meReply(makeUser('admin')),
+      'GET /admin/outbox': { status: 404, body: { statusCode: 404, message: 'The outbox is shown only while the local mail capture is in use (development and tests).' } },
+    });
+    renderApp('/admin/outbox');
+    expect(await screen.findByRole('heading', { name: 'The outbox is shown only in development' })).toBeInTheDocument();
+    expect(screen.queryByRole('list', { name: 'Messages' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Try again' })).not.toBeInTheDocument();
+  });
+
   it('is not for other roles', async () => {
     mockApi({ 'GET /auth/me': meReply(makeUser('coach')) });
     renderApp('/admin/outbox');

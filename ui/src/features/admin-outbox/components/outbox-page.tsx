@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Button, Callout, Card, Collapse, NonIdealState, SegmentedControl, Tag, type Intent } from '@blueprintjs/core';
 import { ChevronDownIcon, ChevronRightIcon, EnvelopeIcon, ErrorIcon, RefreshIcon, SendMessageIcon } from '@blueprintjs/icons';
 import type { OutboxMessageDto } from '@fuelwright/shared';
+import { ApiError } from '../../../lib/api-client';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
@@ -26,6 +27,7 @@ const KIND_LABELS: Record<string, string> = {
   comment: 'Comment',
   'check-recommended': 'Check recommended',
   'photo-requested': 'Photo requested',
+  'photo-added': 'Photo added',
   'case-resolved': 'Case resolved',
   'email-verification': 'Address confirmation',
   'password-reset': 'Password reset',
@@ -110,6 +112,17 @@ export function OutboxPage() {
   const notify = useNotify();
 
   if (outbox.isPending) return <PageSpinner label="Loading the outbox" />;
+  if (outbox.error instanceof ApiError && outbox.error.status === 404) {
+    return (
+      <Page title="Outbox">
+        <NonIdealState
+          icon={<EnvelopeIcon size={48} />}
+          title="The outbox is shown only in development"
+          description="A real mail service is configured, so messages go to real inboxes; their links are not shown here."
+        />
+      </Page>
+    );
+  }
   if (outbox.isError) {
     return (
       <Page title="Outbox">

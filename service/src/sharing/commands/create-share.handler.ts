@@ -2,7 +2,7 @@ import { Inject } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import { and, eq, isNull } from 'drizzle-orm';
-import { cases, shares, type Db } from '@fuelwright/db';
+import { cases, shares, users, type Db } from '@fuelwright/db';
 import type { AppConfig } from '../../config/app.config.js';
 import { DB } from '../../database/database.tokens.js';
 import { FieldsBadRequest } from '../../common/validation.js';
@@ -64,10 +64,14 @@ export class CreateShareHandler implements ICommandHandler<CreateShareCommand> {
         existing?.id ??
         (await tx.insert(shares).values({ ownerId: user.id, scope: input.scope, kartId, caseId, inviteeEmail: email, inviteeRole: input.as }).returning({ id: shares.id }))[0].id;
       const token = await this.tokens.issue(tx, 'invitation', email, { shareId: id });
+      // An invitee who already has an account gets it as theirs, so their "invitation" setting and the
+      // unsubscribe link apply (the answer to the racer stays the same either way).
+      const [invitee] = await tx.select({ id: users.id }).from(users).where(eq(users.email, email));
       const what = input.scope === 'case' ? `a running problem on the kart "${kart.name}"` : `the kart "${kart.name}" and its cases`;
       await this.mail.enqueue(tx, {
         kind: 'invitation',
         toEmail: email,
+        toUserId: invitee?.id ?? null,
         content: {
           subject: `${user.displayName} shared ${input.scope === 'case' ? 'a case' : 'a kart'} with you on Fuelwright`,
           paragraphs: [

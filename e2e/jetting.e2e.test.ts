@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { computeAir, suggestJets } from '@fuelwright/shared';
-import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap, snapPart, snapTop } from './browser.js';
+import { DESKTOP, PHONE, POLL, SCREENSHOT_DIR, dismissToasts, launchChromium, newPage, recordOutsideRequests, snap, snapPart, snapTop } from './browser.js';
 
 const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
 
@@ -135,9 +135,21 @@ describe('jetting in the browser', () => {
     expect(await setupSelect.inputValue()).toBe(latestSetup);
     const setupOptions = await setupSelect.locator('option').allTextContents();
     expect(setupOptions[0]).toBe('None');
-    expect(setupOptions[1]).toMatch(/: main jet 185, clip groove 3 from top \(latest\)$/);
-    expect(setupOptions[2]).toMatch(/: main jet 182\.5, clip groove 2 from top$/);
-    const [latestDay, olderDay] = [setupOptions[1], setupOptions[2]].map((o) => o.split(':')[0]);
+    expect(setupOptions[1]).toMatch(/ · main 185 · clip 3$/);
+    expect(setupOptions[2]).toMatch(/ · main 182\.5 · clip 2$/);
+    const [latestDay, olderDay] = [setupOptions[1], setupOptions[2]].map((o) => o.split(' · ')[0]);
+    // At 390 px the chosen setup reads whole in the closed select: its text is no wider than the
+    // room inside the control (measured in the select's own font).
+    const fit = await setupSelect.evaluate((el: HTMLSelectElement) => {
+      const style = getComputedStyle(el);
+      const context = document.createElement('canvas').getContext('2d')!;
+      context.font = `${style.fontWeight} ${style.fontSize} ${style.fontFamily}`;
+      const text = el.options[el.selectedIndex].text;
+      return { text, width: context.measureText(text).width, room: el.clientWidth - parseFloat(style.paddingLeft) - parseFloat(style.paddingRight) };
+    });
+    expect(fit.text).toContain('main 185');
+    expect(fit.width).toBeLessThanOrEqual(fit.room);
+    await page.getByRole('form', { name: 'Log a session' }).getByText(/^The latest setup, .*: main jet 185, clip groove 3 from top\./).waitFor();
     await page.getByRole('form', { name: 'Log a session' }).getByRole('button', { name: 'Cancel' }).click();
     await logSession(page, {
       day: daysAgo(8),
@@ -156,8 +168,21 @@ describe('jetting in the browser', () => {
     // Each row says which setup it ran (on a phone: a line under the day, linking to the kart's page).
     await rows.nth(0).getByRole('link', { name: `Setup of ${latestDay}: main jet 185, clip groove 3 from top` }).waitFor();
     await rows.nth(1).getByRole('link', { name: `Setup of ${olderDay}: main jet 182.5, clip groove 2 from top` }).waitFor();
-    expect(await rows.nth(1).getByRole('link').getAttribute('href')).toBe(`/karts/${kartId}`);
+    expect(await rows.nth(1).getByRole('link').getAttribute('href')).toBe(`/karts/${kartId}?setup=${olderSetup}#setups`);
     await expectNoSidewaysScroll(page);
+    // The link opens the kart's page at its setups, the one the session ran marked and on screen.
+    await rows.nth(1).getByRole('link').click();
+    const linked = page.getByRole('list', { name: 'Past setups' }).locator(`li[data-setup-id="${olderSetup}"]`);
+    await linked.getByText('Selected').waitFor();
+    expect(await linked.getAttribute('aria-current')).toBe('true');
+    await expect.poll(() => linked.evaluate((el) => {
+      const box = el.getBoundingClientRect();
+      return box.top >= 0 && box.top < window.innerHeight;
+    }), POLL).toBe(true);
+    await dismissToasts(page);
+    await page.screenshot({ path: `${SCREENSHOT_DIR}kart-setup-linked-phone.png` });
+    await page.goBack();
+    await page.getByRole('heading', { name: /Jetting: Browser test kart/ }).waitFor();
     const logged = (await (await page.request.get(`${baseUrl}/api/karts/${kartId}/sessions`)).json()).sessions;
     expect(logged.map((x: { setupId: string | null }) => x.setupId)).toEqual([latestSetup, olderSetup]);
 
@@ -215,7 +240,7 @@ describe('jetting in the browser', () => {
     await snap(page, 'jetting-desktop');
     await page.getByRole('button', { name: 'Log a session' }).click();
     const form = page.getByRole('form', { name: 'Log a session' });
-    expect(await form.locator('#log-setup option:checked').textContent()).toMatch(/main jet 185, clip groove 3 from top \(latest\)$/);
+    expect(await form.locator('#log-setup option:checked').textContent()).toMatch(/ · main 185 · clip 3$/);
     await snapPart(form, 'jetting-log-form-desktop');
     await form.getByRole('button', { name: 'Cancel' }).click();
     await page.getByText('Jet kit', { exact: true }).click();

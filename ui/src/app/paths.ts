@@ -77,6 +77,14 @@ export function kartJettingPath(kartId: string): string {
   return paths.kartJetting.replace(':kartId', encodeURIComponent(kartId));
 }
 
+/** The kart page's query parameter naming a setup to show highlighted in its setups list. */
+export const SETUP_PARAM = 'setup';
+
+/** A kart's page opened at its setups list (`#setups`), with one setup highlighted. */
+export function kartSetupPath(kartId: string, setupId: string): string {
+  return `${paths.kart.replace(':kartId', encodeURIComponent(kartId))}?${SETUP_PARAM}=${encodeURIComponent(setupId)}#setups`;
+}
+
 /** The sign-up page's query parameter that carries an invitation token. */
 export const INVITATION_PARAM = 'invitation';
 

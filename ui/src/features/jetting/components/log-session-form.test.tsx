@@ -41,12 +41,17 @@ describe('log session form: the setup used', () => {
     renderForm([NEWER, OLDER]);
     const select = screen.getByLabelText('Setup used');
     const options = within(select).getAllByRole('option');
+    // Short option texts, so the chosen one is readable in the closed select at 390 px.
     expect(options.map((o) => o.textContent)).toEqual([
       'None',
-      `${formatCalendarDate('2026-11-21')}: main jet 182.5, clip groove 3 from top (latest)`,
-      `${formatCalendarDate('2026-10-02')}: main jet 190, clip groove 2 from top`,
+      `${formatCalendarDate('2026-11-21')} · main 182.5 · clip 3`,
+      `${formatCalendarDate('2026-10-02')} · main 190 · clip 2`,
     ]);
     expect(select).toHaveValue('setup-new');
+    // The chosen setup in full words under the select.
+    expect(select).toHaveAccessibleDescription(
+      `The latest setup, ${formatCalendarDate('2026-11-21')}: main jet 182.5, clip groove 3 from top. Its jets fill the fields below; change any the kart ran differently.`,
+    );
     expect(screen.getByLabelText('Main jet')).toHaveValue('182.5');
     expect(screen.getByLabelText('Pilot jet')).toHaveValue('40');
     expect(screen.getByLabelText('Needle clip groove')).toHaveValue('3');
@@ -61,6 +66,7 @@ describe('log session form: the setup used', () => {
     await user.clear(main);
     await user.type(main, '187.5');
     await user.selectOptions(screen.getByLabelText('Setup used'), 'setup-old');
+    expect(screen.getByLabelText('Setup used')).toHaveAccessibleDescription(new RegExp(`^${formatCalendarDate('2026-10-02')}: main jet 190, clip groove 2 from top\\. Its jets`));
     expect(main).toHaveValue('187.5');
     expect(screen.getByLabelText('Pilot jet')).toHaveValue('37.5');
     expect(screen.getByLabelText('Needle clip groove')).toHaveValue('2');
@@ -84,6 +90,7 @@ describe('log session form: the setup used', () => {
     const user = userEvent.setup();
     renderForm([NEWER, OLDER]);
     await user.selectOptions(screen.getByLabelText('Setup used'), '');
+    expect(screen.getByLabelText('Setup used')).toHaveAccessibleDescription('No setup linked: enter the jets the kart ran below.');
     expect(screen.getByLabelText('Main jet')).toHaveValue('182.5');
     await fillAirAndRan(user);
     await user.click(screen.getByRole('button', { name: 'Log session' }));

@@ -25,7 +25,7 @@ import { TextField } from '../../../components/text-field';
 import { useNotify } from '../../../components/toaster';
 import { formErrors } from '../../../lib/form-errors';
 import { useLogSession } from '../api/log-session';
-import { JET_FIELDS, jetTextsFrom, setupLabel, type JetTexts } from '../lib/setup-summary';
+import { JET_FIELDS, jetTextsFrom, setupLabel, setupOptionLabel, type JetTexts } from '../lib/setup-summary';
 
 const FIELDS = [
   ...AIR_API_FIELDS,
@@ -125,6 +125,7 @@ export function LogSessionForm({
     setTyped((cur) => new Set(cur).add(field));
     set({ [field]: value });
   };
+  const chosenSetup = setups.find((s) => s.id === f.setupId);
   const pickSetup = (setupId: string) => {
     const setup = setups.find((s) => s.id === setupId);
     const filled = jetTextsFrom(setup, latest);
@@ -204,7 +205,9 @@ export function LogSessionForm({
               setupsError ||
               (setups.length === 0
                 ? 'No setup recorded for this kart yet: record one on the kart’s page to link it here.'
-                : 'Its jets fill the fields below; change any the kart ran differently.')}
+                : chosenSetup
+                  ? `${chosenSetup === setups[0] ? 'The latest setup, ' : ''}${setupLabel(chosenSetup)}. Its jets fill the fields below; change any the kart ran differently.`
+                  : 'No setup linked: enter the jets the kart ran below.')}
           </span>
         }
       >
@@ -217,10 +220,10 @@ export function LogSessionForm({
           onChange={(e) => pickSetup(e.currentTarget.value)}
         >
           <option value="">None</option>
-          {setups.map((s, i) => (
+          {/* Short, so the chosen one reads whole in the closed select on a phone; newest first. */}
+          {setups.map((s) => (
             <option key={s.id} value={s.id}>
-              {setupLabel(s)}
-              {i === 0 ? ' (latest)' : ''}
+              {setupOptionLabel(s)}
             </option>
           ))}
         </HTMLSelect>

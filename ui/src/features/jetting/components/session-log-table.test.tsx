@@ -69,7 +69,8 @@ describe('jetting log table: the setup used', () => {
     const linked = within(rowOf(1)).getAllByRole('cell')[column];
     expect(linked).toHaveTextContent(`${day}main jet 182.5, clip groove 3 from top`);
     const link = within(linked).getByRole('link');
-    expect(link).toHaveAttribute('href', '/karts/k1');
+    // Opens the kart page at its setups list with this setup highlighted.
+    expect(link).toHaveAttribute('href', '/karts/k1?setup=setup-1#setups');
     expect(link).toHaveAccessibleName(`Setup of ${day}: main jet 182.5, clip groove 3 from top`);
 
     expect(within(rowOf(2)).getAllByRole('cell')[column]).toHaveTextContent('None');
@@ -83,10 +84,11 @@ describe('jetting log table: the setup used', () => {
     expect(phoneLines).toHaveLength(1);
     expect(within(rowOf(1)).getAllByRole('cell')[0]).toContainElement(phoneLines[0] as HTMLElement);
     expect(phoneLines[0]).toHaveTextContent(`Setup ${formatCalendarDate('2026-11-21')}`);
+    expect(within(phoneLines[0] as HTMLElement).getByRole('link')).toHaveAttribute('href', '/karts/k1?setup=setup-1#setups');
   });
 
   it('still links a setup it cannot name (setups not loaded)', () => {
     renderTable([session('with', 'setup-1')], []);
-    expect(screen.getAllByRole('link', { name: 'The linked setup' })[0]).toHaveAttribute('href', '/karts/k1');
+    expect(screen.getAllByRole('link', { name: 'The linked setup' })[0]).toHaveAttribute('href', '/karts/k1?setup=setup-1#setups');
   });
 });

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Alert, Button, HTMLTable, Tag, type Intent } from '@blueprintjs/core';
 import { TrashIcon } from '@blueprintjs/icons';
-import { Link, generatePath } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import {
   PLUG_COLOUR_LABELS,
   formatDensity,
@@ -12,7 +12,7 @@ import {
   type SetupDto,
   type UnitPreferences,
 } from '@fuelwright/shared';
-import { paths } from '../../../app/paths';
+import { kartSetupPath } from '../../../app/paths';
 import { useNotify } from '../../../components/toaster';
 import { formatCalendarDate } from '../../../lib/setup-fields';
 import { useDeleteSession } from '../api/delete-session';
@@ -29,13 +29,13 @@ export function formatLap(ms: number | null): string {
 }
 
 /**
- * The setup a session ran, as a link to the kart's page (where its setups are listed); with the
- * main jet and clip summary unless `short` (the phone line under the day).
+ * The setup a session ran, as a link to the kart's page opened at its setups list with this one
+ * highlighted; with the main jet and clip summary unless `short` (the phone line under the day).
  */
 function SetupRef({ kartId, session, setups, short }: { kartId: string; session: JettingSessionDto; setups: readonly SetupDto[]; short?: boolean }) {
   if (session.setupId === null) return short ? null : <span className="fw-muted">None</span>;
   const setup = setups.find((s) => s.id === session.setupId);
-  const to = generatePath(paths.kart, { kartId });
+  const to = kartSetupPath(kartId, session.setupId);
   const day = setup ? formatCalendarDate(setup.takenOn) : 'linked setup';
   return (
     <>

@@ -18,6 +18,18 @@ export function setupLabel(setup: Pick<SetupDto, 'takenOn' | 'mainJet' | 'needle
   return `${formatCalendarDate(setup.takenOn)}: ${setupJetSummary(setup)}`;
 }
 
+/**
+ * "21 Nov 2026 · main 182.5 · clip 3": short enough for a closed select on a 390 px phone (the
+ * full wording sits under the select).
+ */
+export function setupOptionLabel(setup: Pick<SetupDto, 'takenOn' | 'mainJet' | 'needleClipGroove'>): string {
+  const parts = [formatCalendarDate(setup.takenOn)];
+  if (setup.mainJet != null) parts.push(`main ${setup.mainJet}`);
+  if (setup.needleClipGroove != null) parts.push(`clip ${setup.needleClipGroove}`);
+  if (parts.length === 1) parts.push('no jets recorded');
+  return parts.join(' · ');
+}
+
 /** The jet fields of the session form a setup fills, as text; '' where the setup does not record one. */
 export interface JetTexts {
   mainJet: string;

@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import type { KartDto, SetupDto } from '@fuelwright/shared';
 import { makeUser, meReply, mockApi, renderApp, setPhoneWidth } from '../../../test-utils';
 
@@ -81,5 +81,39 @@ describe('kart page', () => {
     for (const name of ['Edit', 'Delete', 'Record a setup', 'Diagnose this kart']) {
       expect(screen.queryByRole('button', { name })).not.toBeInTheDocument();
     }
+  });
+
+  it('opened from a jetting log link, shows the setups with the linked one marked and scrolled to', async () => {
+    setPhoneWidth(false);
+    const OLDER: SetupDto = { ...SETUP, id: 's0', takenOn: '2026-08-01', mainJet: 190 };
+    api(undefined, { 'GET /karts/k1/setups': { status: 200, body: { setups: [SETUP, OLDER] } } });
+    const scrolled = vi.spyOn(Element.prototype, 'scrollIntoView');
+    renderApp('/karts/k1?setup=s0#setups');
+    const table = await screen.findByRole('table');
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows.map((r) => r.getAttribute('data-setup-id'))).toEqual(['s1', 's0']);
+    expect(rows[1]).toHaveAttribute('aria-current', 'true');
+    expect(within(rows[1]).getByText('Selected')).toBeInTheDocument();
+    expect(rows[0]).not.toHaveAttribute('aria-current');
+    expect(within(rows[0]).queryByText('Selected')).toBeNull();
+    await waitFor(() => expect(scrolled.mock.contexts).toContain(rows[1]));
+    scrolled.mockRestore();
+  });
+
+  it('on a phone marks the linked setup’s card, and says so when the link names a setup the kart no longer has', async () => {
+    setPhoneWidth(true);
+    api();
+    const { router, unmount } = renderApp('/karts/k1?setup=s1');
+    const cards = await screen.findByRole('list', { name: 'Past setups' });
+    const item = within(cards).getAllByRole('listitem')[0];
+    expect(item).toHaveAttribute('aria-current', 'true');
+    expect(within(item).getByText('Selected')).toBeInTheDocument();
+    expect(router.state.location.search).toBe('?setup=s1');
+    unmount();
+
+    api();
+    renderApp('/karts/k1?setup=gone');
+    expect(await screen.findByText('The setup the link points to is not among this kart’s setups any more.')).toBeInTheDocument();
+    expect(within(screen.getByRole('list', { name: 'Past setups' })).getAllByRole('listitem')[0]).not.toHaveAttribute('aria-current');
   });
 });

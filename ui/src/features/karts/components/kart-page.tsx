@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Alert, Button, Card, H2, NonIdealState, Spinner } from '@blueprintjs/core';
 import {
   AddIcon,
@@ -10,9 +10,9 @@ import {
   FolderOpenIcon,
   TrashIcon,
 } from '@blueprintjs/icons';
-import { generatePath, Link, useNavigate, useParams } from 'react-router-dom';
+import { generatePath, Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { CARBURETTOR_KIND_LABELS, DRIVE_LABELS, type KartDto } from '@fuelwright/shared';
-import { paths } from '../../../app/paths';
+import { paths, SETUP_PARAM } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { Page } from '../../../components/page';
 import { PageSpinner } from '../../../components/page-spinner';
@@ -115,9 +115,29 @@ function DeleteKartAlert({ kart, setupCount, isOpen, onClose }: { kart: KartDto;
   );
 }
 
+/**
+ * Once the setups are on screen, scrolls to the one a link named (`?setup=<id>`, from the jetting
+ * log), or to the list when the address ends in `#setups`. Only once per setup named.
+ */
+function useScrollToSetup(selectedId: string | undefined, loaded: boolean) {
+  const done = useRef<string | null>(null);
+  useEffect(() => {
+    if (!loaded) return;
+    const key = selectedId ?? '#';
+    if (done.current === key) return;
+    const row = selectedId ? [...document.querySelectorAll('[data-setup-id]')].find((el) => el.getAttribute('data-setup-id') === selectedId) : null;
+    const target = row ?? (selectedId || window.location.hash === '#setups' ? document.getElementById('setups') : null);
+    if (!target) return;
+    done.current = key;
+    target.scrollIntoView?.({ block: row ? 'center' : 'start' });
+  }, [selectedId, loaded]);
+}
+
 /** One kart: its facts (edit, delete), the way into a diagnosis, and its setups. */
 export function KartPage() {
   const { kartId = '' } = useParams();
+  const [params] = useSearchParams();
+  const selectedSetupId = params.get(SETUP_PARAM) ?? undefined;
   const viewer = useCurrentUser();
   const kart = useKart(kartId);
   const setups = useSetups(kartId);
@@ -125,6 +145,7 @@ export function KartPage() {
   const [editing, setEditing] = useState(false);
   const [deleting, setDeleting] = useState(false);
   const [recording, setRecording] = useState(false);
+  useScrollToSetup(selectedSetupId, kart.isSuccess && setups.isSuccess);
 
   if (kart.isPending) return <PageSpinner label="Loading the kart" />;
   if (kart.isError) {
@@ -220,7 +241,7 @@ export function KartPage() {
       </Card>
       <DeleteKartAlert kart={k} setupCount={setups.data?.length} isOpen={deleting} onClose={() => setDeleting(false)} />
 
-      <section className="fw-section" aria-labelledby="setups-title">
+      <section className="fw-section" id="setups" aria-labelledby="setups-title">
         <div className="fw-section-head">
           <H2 id="setups-title" className="fw-section-title">
             Setups
@@ -255,7 +276,12 @@ export function KartPage() {
         ) : (
           <>
             <p className="fw-muted fw-section-lead">Newest first. What changed against the setup before is highlighted.</p>
-            {phone ? <SetupCards setups={list} /> : <SetupsTable setups={list} />}
+            {selectedSetupId && !list.some((s) => s.id === selectedSetupId) && (
+              <p className="fw-muted" role="status">
+                The setup the link points to is not among this kart’s setups any more.
+              </p>
+            )}
+            {phone ? <SetupCards setups={list} selectedId={selectedSetupId} /> : <SetupsTable setups={list} selectedId={selectedSetupId} />}
           </>
         )}
       </section>

@@ -29,8 +29,20 @@ function ChangeSummary({ setup, previous }: { setup: SetupDto; previous: SetupDt
   );
 }
 
-/** Past setups, newest first, as a table; each value that changed against the one before is highlighted. */
-export function SetupsTable({ setups }: { setups: SetupDto[] }) {
+/** The mark of the setup a link asked to show (`?setup=` on the kart page). */
+function SelectedTag() {
+  return (
+    <Tag minimal round intent="success" className="fw-setup-selected-tag">
+      Selected
+    </Tag>
+  );
+}
+
+/**
+ * Past setups, newest first, as a table; each value that changed against the one before is
+ * highlighted; `selectedId` marks one row (the one a link pointed at).
+ */
+export function SetupsTable({ setups, selectedId }: { setups: SetupDto[]; selectedId?: string }) {
   return (
     <div className="fw-table-scroll" tabIndex={0} role="region" aria-label="Past setups (scrolls sideways)">
       <HTMLTable className="fw-data-table fw-setups-table" compact>
@@ -48,10 +60,12 @@ export function SetupsTable({ setups }: { setups: SetupDto[] }) {
         <tbody>
           {setups.map((setup, index) => {
             const previous = setups[index + 1];
+            const selected = setup.id === selectedId;
             return (
-              <tr key={setup.id} data-setup-id={setup.id}>
+              <tr key={setup.id} data-setup-id={setup.id} aria-current={selected ? 'true' : undefined} className={selected ? 'fw-setup-selected' : undefined}>
                 <th scope="row" className="fw-setup-date">
                   {formatCalendarDate(setup.takenOn)}
+                  {selected && <> <SelectedTag /></>}
                   <div className="fw-small fw-setup-change-summary">
                     <ChangeSummary setup={setup} previous={previous} />
                   </div>
@@ -74,21 +88,25 @@ export function SetupsTable({ setups }: { setups: SetupDto[] }) {
 }
 
 /** The same on a phone: one card per snapshot, what changed first. */
-export function SetupCards({ setups }: { setups: SetupDto[] }) {
+export function SetupCards({ setups, selectedId }: { setups: SetupDto[]; selectedId?: string }) {
   return (
     <ol className="fw-card-list" aria-label="Past setups">
       {setups.map((setup, index) => {
         const previous = setups[index + 1];
+        const selected = setup.id === selectedId;
         return (
-          <li key={setup.id} data-setup-id={setup.id}>
-            <Card className="fw-setup-card">
+          <li key={setup.id} data-setup-id={setup.id} aria-current={selected ? 'true' : undefined}>
+            <Card className={selected ? 'fw-setup-card fw-setup-selected' : 'fw-setup-card'}>
               <div className="fw-setup-card-head">
                 <strong>{formatCalendarDate(setup.takenOn)}</strong>
-                {index === 0 && (
-                  <Tag minimal round intent="primary">
-                    Latest
-                  </Tag>
-                )}
+                <span className="fw-setup-card-tags">
+                  {selected && <SelectedTag />}
+                  {index === 0 && (
+                    <Tag minimal round intent="primary">
+                      Latest
+                    </Tag>
+                  )}
+                </span>
               </div>
               <div className="fw-small fw-setup-change-summary">
                 <ChangeSummary setup={setup} previous={previous} />

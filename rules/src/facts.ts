@@ -21,8 +21,10 @@ import {
   AIR_SCREW_USUAL_TURNS_OUT,
   EIGHTY_CC_BAND,
   MAIN_JET_USUAL_80CC,
+  NEEDLE_CLIP_ENDS,
   PILOT_JET_USUAL_80CC,
   densityChangePct as densityChange,
+  needleClipEnd,
   vsUsual,
   type VsUsual,
 } from './trade.js';
@@ -193,6 +195,12 @@ export const FACTS: readonly FactDefinition[] = [
     type: { kind: 'enum', values: VS_USUAL },
     compute: ({ request }) =>
       request.setup.airScrewTurnsOut === undefined ? undefined : vsUsual(request.setup.airScrewTurnsOut, AIR_SCREW_USUAL_TURNS_OUT),
+  },
+  {
+    id: 'needleClipEnd',
+    description: 'Needle clip at the top groove (leanest), at groove 5 or below (richest on a usual needle), or between.',
+    type: { kind: 'enum', values: NEEDLE_CLIP_ENDS },
+    compute: ({ request }) => (request.setup.needleClipGroove === undefined ? undefined : needleClipEnd(request.setup.needleClipGroove)),
   },
   {
     id: 'mainJetVsUsual80cc',

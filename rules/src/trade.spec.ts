@@ -9,7 +9,9 @@ import {
   AIR_SCREW_USUAL_TURNS_OUT,
   BAND_CIRCUIT_CAUSES,
   MAIN_JET_USUAL_80CC,
+  NEEDLE_CLIP_BOTTOM_GROOVE,
   NEEDLE_CLIP_COUNTED_FROM,
+  NEEDLE_CLIP_TOP_GROOVE,
   PILOT_JET_STEP,
   PILOT_JET_USUAL_80CC,
   RACING_IDLE_SCREW,
@@ -18,6 +20,7 @@ import {
   densityEffect,
   idleScrewEffect,
   isPilotJetStep,
+  needleClipEnd,
   needleClipFor,
   nextAirScrewSetting,
   vsUsual,
@@ -159,6 +162,55 @@ describe('jets and needle', () => {
     expect(needleClipFor(3, 'leaner')).toBe(2);
     expect(needleClipFor(1, 'leaner')).toBe(1);
     expect(check('needle-inspect').steps[0]).toMatch(/from the top/);
+  });
+
+  it('the top groove holds the needle lowest (the leanest mid-range), groove 5 or below highest (the richest)', () => {
+    // Source: common practice, no published source (grooves counted from the top; a lower groove
+    // raises the needle and richens the 1/4 to 3/4 range, a higher groove lowers it and leans it;
+    // usual needles have five grooves).
+    expect([NEEDLE_CLIP_TOP_GROOVE, NEEDLE_CLIP_BOTTOM_GROOVE]).toEqual([1, 5]);
+    expect([1, 2, 3, 4, 5, 6].map(needleClipEnd)).toEqual(['top', 'between', 'between', 'between', 'bottom', 'bottom']);
+    expect(factsOf({ needleClipGroove: 1 }).get('needleClipEnd')).toBe('top');
+    expect(factsOf({ needleClipGroove: 5 }).get('needleClipEnd')).toBe('bottom');
+    expect(factsOf({}).get('needleClipEnd')).toBeUndefined();
+    // From the top groove the only way is down (richer); from the bottom, up (leaner).
+    expect(needleClipFor(NEEDLE_CLIP_TOP_GROOVE, 'richer')).toBe(2);
+    expect(needleClipFor(NEEDLE_CLIP_BOTTOM_GROOVE, 'leaner')).toBe(4);
+  });
+
+  it('rich from 1/4 to 3/4 with the clip in the bottom groove puts the clip groove first, saying why', async () => {
+    // Source: common practice, no published source (a lower groove raises the needle and richens
+    // the 1/4 to 3/4 range).
+    const symptoms = [{ id: 'rich-blubber', band: 'quarter-to-three-quarters' as const }];
+    const bottom = await rank({ symptoms, setup: { needleClipGroove: 5 } });
+    const middle = await rank({ symptoms, setup: { needleClipGroove: 3 } });
+    const top = await rank({ symptoms, setup: { needleClipGroove: 1 } });
+    expect(ids(bottom, 1)).toEqual(['needle-clip-wrong-groove']);
+    expect(prob(bottom, 'needle-clip-wrong-groove')).toBeGreaterThan(2 * prob(middle, 'needle-clip-wrong-groove'));
+    const why = bottom.causes[0].reasons.map((r) => r.text).join(' / ');
+    expect(why).toMatch(/bottom groove, where the needle sits highest and richest/);
+    // Already at the leanest groove, the clip does not explain a rich mid-range.
+    expect(prob(top, 'needle-clip-wrong-groove')).toBeLessThan(prob(middle, 'needle-clip-wrong-groove'));
+    expect(ids(top, 1)).not.toEqual(['needle-clip-wrong-groove']);
+  });
+
+  it('lean from 1/4 to 3/4 with the clip in the top groove puts the clip groove first, saying why', async () => {
+    // Source: common practice, no published source (a higher groove lowers the needle and leans
+    // the 1/4 to 3/4 range; the top groove is as lean as the needle goes).
+    const symptoms = [{ id: 'lean-top-end', band: 'quarter-to-three-quarters' as const }];
+    const top = await rank({ symptoms, setup: { needleClipGroove: 1 } });
+    const middle = await rank({ symptoms, setup: { needleClipGroove: 3 } });
+    const bottom = await rank({ symptoms, setup: { needleClipGroove: 5 } });
+    expect(ids(top, 1)).toEqual(['needle-clip-wrong-groove']);
+    expect(ids(middle, 1)).not.toEqual(['needle-clip-wrong-groove']);
+    expect(top.causes[0].reasons.map((r) => r.text).join(' / ')).toMatch(/top groove, where the needle sits lowest and leanest/);
+    expect(prob(bottom, 'needle-clip-wrong-groove')).toBeLessThan(prob(middle, 'needle-clip-wrong-groove'));
+    // A mid-range bog with the clip at the leanest groove leans on the clip too.
+    const bog = (needleClipGroove: number) => rank({ symptoms: [{ id: 'bog-on-acceleration', band: 'quarter-to-three-quarters' }], setup: { needleClipGroove } });
+    expect(prob(await bog(1), 'needle-clip-wrong-groove')).toBeGreaterThan(prob(await bog(3), 'needle-clip-wrong-groove'));
+    // Outside the needle's band the clip position says nothing.
+    const topEnd = (needleClipGroove: number) => rank({ symptoms: [{ id: 'lean-top-end', band: 'three-quarters-to-full' }], setup: { needleClipGroove } });
+    expect(prob(await topEnd(1), 'needle-clip-wrong-groove')).toBeCloseTo(prob(await topEnd(3), 'needle-clip-wrong-groove'), 12);
   });
 
   it('a main jet below the usual size strengthens "too small" for a lean top end', async () => {

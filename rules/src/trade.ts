@@ -75,6 +75,24 @@ export function needleClipFor(groove: number, want: MixtureChange): number {
   return Math.min(7, Math.max(1, next));
 }
 
+/**
+ * The needle's usual clip grooves run from 1 (the top) to 5: groove 1 holds the needle lowest in
+ * the needle jet (the leanest mid-range the needle gives), groove 5 and below hold it highest (the
+ * richest on a usual five-groove needle).
+ */
+export const NEEDLE_CLIP_TOP_GROOVE = 1;
+export const NEEDLE_CLIP_BOTTOM_GROOVE = 5;
+
+/** Where the clip sits: at the top groove, at or below the usual bottom groove, or between. */
+export type NeedleClipEnd = 'top' | 'between' | 'bottom';
+export const NEEDLE_CLIP_ENDS: readonly NeedleClipEnd[] = ['top', 'between', 'bottom'];
+
+export function needleClipEnd(groove: number): NeedleClipEnd {
+  if (groove <= NEEDLE_CLIP_TOP_GROOVE) return 'top';
+  if (groove >= NEEDLE_CLIP_BOTTOM_GROOVE) return 'bottom';
+  return 'between';
+}
+
 /** Whether a pilot jet size is one of the usual 2.5 steps. */
 export function isPilotJetStep(size: number): boolean {
   const steps = size / PILOT_JET_STEP;

@@ -149,8 +149,15 @@ describe('cases over HTTP', () => {
       const agent = await signedIn(t, demoUser(role));
       expect((await agent.get(`/api/cases/${c.id}`)).status).toBe(404);
     }
+    // Opening a case on another racer's kart goes through the same policy: 404, nothing written.
+    const before = (await t.db.db.select().from(cases)).length;
     const onOthersKart = await open(racer, { kartId: otherKartId, symptoms: ['hesitation'] });
-    expect(onOthersKart.status).toBe(400);
-    expect(onOthersKart.body.fields.kartId).toBeDefined();
+    expect(onOthersKart.status).toBe(404);
+    expect(onOthersKart.body.message).toBe('No such kart.');
+    // An id that names no kart at all answers the same, so the two cannot be told apart.
+    const noKart = await open(racer, { kartId: '00000000-0000-4000-8000-000000000000', symptoms: ['hesitation'] });
+    expect(noKart.status).toBe(404);
+    expect(noKart.body).toEqual(onOthersKart.body);
+    expect((await t.db.db.select().from(cases)).length).toBe(before);
   });
 });

@@ -24,12 +24,9 @@ export class OpenCaseHandler implements ICommandHandler<OpenCaseCommand> {
   ) {}
 
   async execute({ user, input }: OpenCaseCommand) {
-    const kart = await findKart(this.db, input.kartId);
-    if (!kart || kart.ownerId !== user.id) {
-      // Cases are opened by the kart's owner; anything else reads as "no such kart" on that field.
-      throw new FieldsBadRequest({ kartId: ['kartId must be the id of one of your karts'] });
-    }
-    this.access.require(user, kart, 'edit', 'kart');
+    // Opening a case changes the kart's record, so it takes 'edit': the owner only. Anyone else
+    // (another racer, a coach or shop it is shared with, an admin) gets the policy's 404.
+    const kart = await this.access.requireKart(user, await findKart(this.db, input.kartId), 'edit');
     const setup: SetupSnapshot = { ...(input.setup ?? (await this.latestSetup(kart.id))), carburettorKind: kart.carburettorKind };
     const conditions = await withDensityChange(this.airBaseline, kart.id, input.conditions ?? {});
     const symptoms = input.symptoms.map((s) => (typeof s === 'string' ? { id: s } : s));

@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { isAbsolute, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { registerAs } from '@nestjs/config';
@@ -74,6 +74,8 @@ export function loadOrCreateSecret(dataDir: string): string {
   mkdirSync(dataDir, { recursive: true });
   const s = randomBytes(48).toString('base64url');
   writeFileSync(file, s + '\n', { mode: 0o600 });
+  // `mode` only applies when the file is created; a replaced (damaged) file is tightened here.
+  chmodSync(file, 0o600);
   return s;
 }
 

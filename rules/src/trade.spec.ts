@@ -102,6 +102,48 @@ describe('vent lines', () => {
   });
 });
 
+describe('pump-around carburettor', () => {
+  it('has no float or needle valve: float-valve causes and checks are left out of the ranking and the plan', async () => {
+    // Source: common practice, no published source (a pump feeds the bowl and a return tube draws
+    // the surplus back to the tank; there is no float and no needle valve).
+    const floatOnly = ruleset.catalog.causes.filter((c) => c.carburettorKinds && !c.carburettorKinds.includes('pump-around')).map((c) => c.id);
+    const floatChecks = ruleset.catalog.checks.filter((k) => k.carburettorKinds && !k.carburettorKinds.includes('pump-around')).map((k) => k.id);
+    expect(floatOnly).toContain('float-valve-stuck-or-worn');
+    expect(floatChecks).toContain('float-valve-inspect');
+    for (const symptom of ['fuel-from-vents', 'rich-blubber', 'sporadic-running']) {
+      const pump = await rank({ symptoms: [symptom], setup: { carburettorKind: 'pump-around' } });
+      for (const id of floatOnly) {
+        expect(ids(pump), `${symptom}: ${id}`).not.toContain(id);
+        expect(pump.excluded.map((e) => e.id), `${symptom}: ${id}`).toContain(id);
+      }
+      for (const id of floatChecks) expect(pump.plan.map((s) => s.checkId), `${symptom}: ${id}`).not.toContain(id);
+      // On a float-valve carburettor the same symptom keeps them.
+      const float = await rank({ symptoms: [symptom], setup: { carburettorKind: 'float-valve' } });
+      expect(ids(float)).toContain('float-valve-stuck-or-worn');
+      expect(float.plan.map((s) => s.checkId)).toContain('float-valve-inspect');
+    }
+  });
+
+  it('the return tube sets the fuel level, so a loose one ranks for fuel-level symptoms', async () => {
+    // Source: common practice, no published source (the return tube draws the surplus back to the
+    // tank, so its top sets the fuel level in the bowl).
+    const cause = ruleset.catalog.causes.find((c) => c.id === 'return-tube-loose')!;
+    expect(cause.description).toMatch(/sets the fuel level/);
+    expect(check('fuel-level-measure').steps[0]).toMatch(/Pump-around: measure the height of the return tube/);
+    const setup = { carburettorKind: 'pump-around' as const };
+    const baseline = prob(await rank({ symptoms: [], setup }), 'return-tube-loose');
+    // Symptoms of a fuel level too high (rich, flooding, fuel from the vents) or too low (lean, starving in corners or after laps).
+    for (const symptom of ['rich-blubber', 'hard-warm-start', 'fuel-from-vents', 'lean-top-end', 'cuts-out-in-corners', 'fades-after-laps']) {
+      const res = await rank({ symptoms: [symptom], setup });
+      expect(prob(res, 'return-tube-loose'), symptom).toBeGreaterThan(1.4 * baseline);
+      expect(rankOf(res, 'return-tube-loose'), symptom).toBeLessThan(10);
+      expect(res.causes.find((c) => c.id === 'return-tube-loose')!.reasons.some((r) => r.kind === 'rule'), symptom).toBe(true);
+    }
+    // A symptom that has nothing to do with the fuel level does not point at it.
+    expect(prob(await rank({ symptoms: ['throttle-slow-to-return'], setup }), 'return-tube-loose')).toBeLessThan(baseline);
+  });
+});
+
 describe('pump-around bowl foam', () => {
   it('missing or rotten foam causes bogging, hesitation or sporadic running', async () => {
     // Source: common practice, no published source.

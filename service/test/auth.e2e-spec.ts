@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { eq } from 'drizzle-orm';
+import { eq, like } from 'drizzle-orm';
 import { sessions, users } from '@fuelwright/db';
 import { SIGN_IN_FAILED_MESSAGE } from '@fuelwright/shared';
 import { createTestApp, demoUser, signedIn, type TestApp } from './test-app.js';
@@ -104,5 +104,27 @@ describe('rate limits on sign-in', () => {
     expect(codes).toEqual([401, 401, 401, 429, 429]);
     const limited = await t.http.post('/api/auth/sign-in').send({ email: 'racer@fuelwright.test', password: 'wrong password' });
     expect(limited.body.message).toMatch(/Too many attempts/);
+  });
+});
+
+describe('rate limits on sign-up', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ throttleLimit: 3, throttleTtlMs: 60_000 });
+  });
+  afterAll(() => t.close());
+
+  it('answers 429 after the configured number of sign-ups in the window, and the refused ones write no account', async () => {
+    const codes: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      const res = await t.http
+        .post('/api/auth/sign-up')
+        .send({ email: `burst${i}@example.test`, password: 'long enough password', displayName: `Burst ${i}` });
+      codes.push(res.status);
+      if (res.status === 429) expect(res.body.message).toMatch(/Too many attempts/);
+    }
+    expect(codes).toEqual([201, 201, 201, 429, 429]);
+    const created = await t.db.db.select({ email: users.email }).from(users).where(like(users.email, 'burst%@example.test'));
+    expect(created.map((u) => u.email).sort()).toEqual(['burst0@example.test', 'burst1@example.test', 'burst2@example.test']);
   });
 });

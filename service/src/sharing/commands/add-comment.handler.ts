@@ -1,6 +1,7 @@
 import { Inject } from '@nestjs/common';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { comments, type Db } from '@fuelwright/db';
+import { eq } from 'drizzle-orm';
+import { cases, comments, type Db } from '@fuelwright/db';
 import { DB } from '../../database/database.tokens.js';
 import { MailService } from '../../mail/mail.service.js';
 import { CaseAudience } from '../../cases/case-audience.js';
@@ -21,6 +22,8 @@ export class AddCommentHandler implements ICommandHandler<AddCommentCommand> {
     const to = await this.audience.of({ caseId, kartId: c.row.kartId, ownerId: c.row.ownerId }, user.id);
     const row = await this.db.transaction(async (tx) => {
       const [inserted] = await tx.insert(comments).values({ caseId, authorId: user.id, body }).returning();
+      // A comment is a change to the case: it moves the case up the shared-cases dashboard.
+      await tx.update(cases).set({ updatedAt: new Date() }).where(eq(cases.id, caseId));
       for (const r of to) {
         await this.mail.enqueue(tx, {
           kind: 'comment',

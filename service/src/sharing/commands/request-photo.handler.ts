@@ -1,7 +1,7 @@
 import { Inject } from '@nestjs/common';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import { eq } from 'drizzle-orm';
-import { photoRequests, users, type Db } from '@fuelwright/db';
+import { cases, photoRequests, users, type Db } from '@fuelwright/db';
 import { DB } from '../../database/database.tokens.js';
 import { MailService } from '../../mail/mail.service.js';
 import { FieldsBadRequest } from '../../common/validation.js';
@@ -24,6 +24,8 @@ export class RequestPhotoHandler implements ICommandHandler<RequestPhotoCommand>
     if (checkId && !this.ranking.checkLabel(checkId, c.row.rulesetVersion)) throw new FieldsBadRequest({ checkId: [`unknown check "${checkId}"`] });
     const row = await this.db.transaction(async (tx) => {
       const [inserted] = await tx.insert(photoRequests).values({ caseId, requestedBy: user.id, what, checkId: checkId ?? null }).returning();
+      // A photo request is a change to the case: it moves the case up the shared-cases dashboard.
+      await tx.update(cases).set({ updatedAt: new Date() }).where(eq(cases.id, caseId));
       const [owner] = await tx.select({ email: users.email }).from(users).where(eq(users.id, c.row.ownerId));
       await this.mail.enqueue(tx, {
         kind: 'photo-requested',

@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { asc, eq } from 'drizzle-orm';
 import { caseEvents, cases } from '@fuelwright/db';
 import type { CaseDto } from '@fuelwright/shared';
+import { replay, type CaseEvent } from '../src/cases/case-projection.js';
 import { createTestApp, demoUser, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -55,6 +57,26 @@ describe('cases over HTTP', () => {
     expect(again.body.openingRank).toEqual(c.rank);
     const rows = await t.db.db.select().from(caseEvents);
     expect(rows.filter((r) => r.caseId === c.id).map((r) => r.seq)).toEqual([1, 2, 3]);
+  });
+
+  it('replaying the stored case_events rows of a case gives the stored cases.snapshot', async () => {
+    const c: CaseDto = (await open(racer, { kartId, symptoms: ['bog-on-acceleration', 'sporadic-running'] })).body;
+    const [a, b] = c.rank.plan;
+    expect((await racer.post(`/api/cases/${c.id}/results`).send({ checkId: a.checkId, result: 'looks-fine', note: 'clean' })).status).toBe(200);
+    expect((await racer.put(`/api/cases/${c.id}/symptoms`).send({ symptoms: [{ id: 'bog-on-acceleration', band: 'up-to-quarter' }] })).status).toBe(200);
+    expect((await racer.post(`/api/cases/${c.id}/results`).send({ checkId: b.checkId, result: 'fault-found' })).status).toBe(200);
+    expect((await racer.post(`/api/cases/${c.id}/results`).send({ checkId: a.checkId, result: 'not-checked' })).status).toBe(200);
+    expect((await racer.post(`/api/cases/${c.id}/abandon`).send({ reason: 'Out of time' })).status).toBe(200);
+
+    const rows = await t.db.db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id)).orderBy(asc(caseEvents.seq));
+    expect(rows.map((r) => r.type)).toEqual(['opened', 'check-recorded', 'symptoms-reported', 'check-recorded', 'check-recorded', 'abandoned']);
+    const events = rows.map((r) => ({ type: r.type, payload: r.payload, at: r.at, actorId: r.actorId }) as CaseEvent);
+    const [row] = await t.db.db.select().from(cases).where(eq(cases.id, c.id));
+    const replayed = replay(events);
+    expect(replayed).toEqual(row.snapshot);
+    expect(replayed.state).toBe('abandoned');
+    expect(replayed.results.map((r) => [r.checkId, r.result])).toEqual([[b.checkId, 'fault-found'], [a.checkId, 'not-checked']]);
+    expect(row.revision).toBe(rows.length);
   });
 
   it('resolves a case with a catalog cause, then refuses further steps with 409', async () => {

@@ -1,5 +1,5 @@
 /**
- * Learning from outcomes at the issue's scale: 50,000 invented outcomes (fixtures/generate-outcomes.ts)
+ * Learning from outcomes at the target scale: 50,000 invented outcomes (fixtures/generate-outcomes.ts)
  * written to a JSON-lines file, then
  *   1. the insight metrics, streamed from the file one record at a time;
  *   2. a refinement proposal with its back-test (20 % held out), streamed from the file, with the

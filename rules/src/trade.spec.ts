@@ -291,8 +291,10 @@ describe('circuits by throttle opening', () => {
 
 describe('air density', () => {
   it('denser air leans the mixture, thinner air richens it', () => {
-    // Source: from memory (fuel through a jet scales with the square root of the air density,
-    // air mass with the density, so the mixture leans as density rises); common practice.
+    // Source: Heywood, Internal Combustion Engine Fundamentals (McGraw-Hill 1988), ch. 7
+    // (carburettor metering): fuel through the jet and air through the venturi follow the same
+    // depression, so the fuel/air ratio goes as sqrt(fuel density / air density) and the mixture
+    // leans as the air density rises.
     expect(densityEffect(4)).toBe('leaner');
     expect(densityEffect(-4)).toBe('richer');
     expect(densityEffect(0)).toBe('unchanged');

@@ -36,7 +36,7 @@ describe('the shipped ruleset', () => {
     expect(loadRuleset()).toBe(ruleset);
   });
 
-  it('holds the minimum ids the issue lists (ids are stable API)', () => {
+  it('holds the minimum ids the product promises (ids are stable API)', () => {
     const { catalog } = loadRuleset();
     const symptoms = catalog.symptoms.map((s) => s.id);
     const causes = catalog.causes.map((c) => c.id);

@@ -70,7 +70,7 @@ function zodIssues(error: z.ZodError, file: string, prefix: string, describe?: (
   });
 }
 
-/** Validates the catalog on its own. Returns the typed catalog or the issues. */
+/** Validates the catalog on its own. Returns the typed catalog, or every problem found as `issues`. */
 export function validateCatalog(raw: unknown): { catalog?: Catalog; issues: RulesetIssue[] } {
   const file = CATALOG_FILE;
   const parsed = catalogSchema.safeParse(raw);

@@ -1,5 +1,5 @@
 /**
- * Learning from outcomes over HTTP, at the issue's scale: a temporary PGlite database (migrated,
+ * Learning from outcomes over HTTP, at the target scale: a temporary PGlite database (migrated,
  * demo club seeded) with 50,000 INVENTED outcomes (fixtures/generate-outcomes.ts, marked demo),
  * the real Nest application listening on loopback, and the demo admin signed in. Measures
  *   1. the start-up, until the day and month roll-ups of the bulk-loaded outcomes are built (in the

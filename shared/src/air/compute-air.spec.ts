@@ -23,8 +23,8 @@ describe('computeAir', () => {
     expect(r.densityKgM3).toBe(air.densityKgM3);
     expect(r.dryAirDensityKgM3).toBe(air.dryAirDensityKgM3);
     expect(r.vaporPressureHpa).toBeCloseTo(air.vapourPressurePa / 100, 12);
-    // Vapour pressure at 20 C, 50 % RH is about half of 23.39 hPa times f = 1.004 (CRC table value
-    // 2.3392 kPa; CIPM-2007 enhancement factor): 11.74 hPa.
+    // Vapour pressure at 20 C, 50 % RH is about half of 23.39 hPa times f = 1.004 (IAPWS-IF97
+    // saturation pressure 2.3392 kPa, see vapour.spec.ts; CIPM-2007 enhancement factor): 11.74 hPa.
     expect(r.vaporPressureHpa).toBeCloseTo(11.74, 2);
     expect(r.stationPressureHpa).toBe(1013.25);
     expect(r.reference).toBe('isa-sea-level');

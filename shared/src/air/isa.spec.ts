@@ -37,7 +37,7 @@ describe('ISA troposphere at geopotential altitudes', () => {
 describe('ISA at geometric altitudes', () => {
   // U.S. Standard Atmosphere 1976 (identical to the ISA below 32 km), table by GEOMETRIC altitude
   // z: 1000 m: 281.651 K, 89 876 Pa, 1.1117 kg/m3; 2000 m: 275.154 K, 79 501 Pa, 1.0066 kg/m3
-  // (from memory; the issue quotes these densities beside the geopotential T and p).
+  // (from memory).
   it.each([
     [1000, 281.651, 89876, 1.1117],
     [2000, 275.154, 79501, 1.0066],

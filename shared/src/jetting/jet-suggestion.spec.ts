@@ -155,7 +155,7 @@ describe('suggestJets', () => {
   });
 
   it('adds a lean-seizure caution whenever the main goes more than one size leaner (property)', () => {
-    // Product rule from the issue: never more than one main-jet size leaner without the caution.
+    // Product rule: never more than one main-jet size leaner without the caution.
     fc.assert(
       fc.property(mainJet, density, density, scaling, fc.constantFrom(1, 2.5, 5), (n0, rb, rt, sc, step) => {
         const s = suggestJets({ baseline: { mainJet: n0, densityKgM3: rb }, today: { densityKgM3: rt }, scaling: sc, mainJetSizes: { step } });

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { SETUP_RANGES, type SetupDto } from '@fuelwright/shared';
 import { parsePremix, setupFormFrom, todayIso, validateSetupForm, type SetupFormValues } from './setup-form';
 
-// The ranges checked here are the product's own input rules (shared/src/setup.ts SETUP_RANGES,
-// issue 4 "Bad input"), which the client must apply exactly as the server does. They are not
+// The ranges checked here are the product's own input rules (shared/src/setup.ts SETUP_RANGES;
+// bad input is a 400 naming the field), which the client must apply exactly as the server does. They are not
 // facts of the trade, so no trade source applies.
 
 const TODAY = '2026-11-30';

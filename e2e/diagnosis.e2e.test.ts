@@ -21,6 +21,20 @@ async function snap(page: Page, name: string): Promise<void> {
   await snapPage(page, name);
 }
 
+/**
+ * The same screen at desktop width too: the page is widened, captured as `name`, and put back to
+ * the phone's size (the layout follows the width, so the walk-through's place is kept).
+ */
+async function snapDesktopToo(page: Page, name: string): Promise<void> {
+  await page.setViewportSize(DESKTOP);
+  await page.waitForFunction((w) => window.innerWidth === w, DESKTOP.width);
+  // Two frames: the layout and the width queries have answered before the capture.
+  await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
+  await snap(page, name);
+  await page.setViewportSize(PHONE);
+  await page.waitForFunction((w) => window.innerWidth === w, PHONE.width);
+}
+
 /** Waits until the element shows (vitest's expect has no browser matchers). */
 async function visible(locator: Locator): Promise<void> {
   await locator.first().waitFor({ state: 'visible', ...WAIT });
@@ -348,6 +362,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByLabel('Kart name').fill(`Red ${RUN}`);
       await page.getByLabel('Engine size (cc)').fill('125');
       await snap(page, 'diagnosis-phone-09-save');
+      await snapDesktopToo(page, 'diagnosis-desktop-09-save');
       await page.getByRole('button', { name: 'Add the kart and save the case' }).click();
       await page.waitForURL(/\/cases\/[^/]+\/walk-through$/, WAIT);
       await waitForScreen(page, 'ranking');
@@ -383,14 +398,21 @@ describe('the guided walk-through in the browser', () => {
       expect(await page.getByLabel('Main jet').inputValue()).not.toBe('');
       await pickSymptom(page, 'hesitation');
       await snap(page, 'diagnosis-case-phone-01-intake');
+      await snapDesktopToo(page, 'diagnosis-case-desktop-01-intake');
       await page.getByRole('button', { name: 'Open the case and rank the causes' }).click();
       await page.waitForURL(/\/cases\/[^/]+\/walk-through$/, WAIT);
       await waitForScreen(page, 'ranking');
       await expect.poll(() => page.getByText('Case on').innerText(), WAIT).toContain('Blue 27');
       const caseId = page.url().split('/cases/')[1].split('/')[0];
+      await visible(page.getByRole('button', { name: /^Start with:/ }));
+      await snapDesktopToo(page, 'diagnosis-case-desktop-02-causes-and-plan');
 
       await page.getByRole('button', { name: /^Start with:/ }).click();
-      const { checkId } = await openCheck(page, catalog);
+      // The plan puts the throttle check first, for safety: it handles the throttle, so its cautions come first.
+      await visible(page.getByRole('heading', { name: /Before you start/ }));
+      await snapDesktopToo(page, 'diagnosis-case-desktop-03-check-cautions');
+      const { checkId, hadCautions } = await openCheck(page, catalog);
+      expect(hadCautions).toBe(true);
       // Reload mid-check: the place is restored and checked against the server's case.
       await page.reload();
       await waitForScreen(page, 'check');
@@ -440,6 +462,7 @@ describe('the guided walk-through in the browser', () => {
       await page.getByRole('button', { name: 'Save: fixed' }).click();
       await waitForScreen(page, 'summary');
       await snap(page, 'diagnosis-case-phone-05-summary');
+      await snapDesktopToo(page, 'diagnosis-case-desktop-05-summary');
       dto = (await apiFromPage<CaseDto>(page, 'GET', `/api/cases/${caseId}`)).body;
       expect(dto.state).toBe('resolved');
       expect(dto.resolution).toMatchObject({ causeId: topCause.id, fix: 'Cleaned and refitted it' });

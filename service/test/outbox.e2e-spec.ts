@@ -1,4 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import { outbox } from '@fuelwright/db';
+import { MAX_ATTEMPTS } from '../src/mail/retry-schedule.js';
 import { MailService } from '../src/mail/mail.service.js';
 import { MailCaptureServer } from '../src/mail/mail-capture.server.js';
 import { createTestApp, demoUser, flushMail, signedIn, type TestApp } from './test-app.js';
@@ -21,6 +24,46 @@ describe('the admin outbox with the local mail capture (development, tests)', ()
     const reset = res.body.messages.find((m: { kind: string }) => m.kind === 'password-reset');
     expect(reset.text).toContain(link);
     expect((await (await signedIn(t, demoUser('coach'))).get('/api/admin/outbox')).status).toBe(403);
+  });
+});
+
+describe('a message that failed for good', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('is marked failed after its last try, and the admin can queue it again', async () => {
+    const mail = t.app.get(MailService);
+    await t.http.post('/api/auth/request-password-reset').send({ email: 'racer2@fuelwright.test' });
+    const [queued] = await t.db.db.select().from(outbox).where(eq(outbox.kind, 'password-reset'));
+    // As if it had already been tried all day: the next failure is the last.
+    await t.db.db.update(outbox).set({ attempts: MAX_ATTEMPTS - 1 }).where(eq(outbox.id, queued.id));
+    mail.capture!.failNext = 1;
+    await mail.flush();
+    const row = async () => (await t.db.db.select().from(outbox).where(eq(outbox.id, queued.id)))[0];
+    expect(await row()).toMatchObject({ status: 'failed', attempts: MAX_ATTEMPTS });
+    // Failed means no more tries, however often the sender looks.
+    await t.db.db.update(outbox).set({ nextAttemptAt: new Date(Date.now() - 1000) }).where(eq(outbox.id, queued.id));
+    expect(await mail.flush()).toBe(0);
+
+    const admin = await signedIn(t, demoUser('admin'));
+    const coach = await signedIn(t, demoUser('coach'));
+    expect((await coach.post(`/api/admin/outbox/${queued.id}/retry`)).status).toBe(403);
+    const res = await admin.post(`/api/admin/outbox/${queued.id}/retry`);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ id: queued.id, status: 'pending' });
+    expect(await row()).toMatchObject({ status: 'pending', attempts: 0 });
+    expect(await mail.flush()).toBe(1);
+    expect(await row()).toMatchObject({ status: 'sent', attempts: 1 });
+    expect(mail.capture!.received.filter((m) => m.to.includes('racer2@fuelwright.test'))).toHaveLength(1);
+
+    const again = await admin.post(`/api/admin/outbox/${queued.id}/retry`);
+    expect(again.status).toBe(409);
+    expect(again.body.message).toMatch(/sent/);
+    expect((await admin.post('/api/admin/outbox/00000000-0000-4000-8000-000000000000/retry')).status).toBe(404);
+    expect((await admin.post('/api/admin/outbox/not-an-id/retry')).status).toBe(404);
   });
 });
 

@@ -1,5 +1,5 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
-import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { and, asc, eq, lte, sql } from 'drizzle-orm';
 import nodemailer, { type Transporter } from 'nodemailer';
@@ -10,9 +10,7 @@ import { DB } from '../database/database.tokens.js';
 import { MailCaptureServer } from './mail-capture.server.js';
 import { renderMail, type MailContent, type MailKind } from './mail-templates.js';
 
-/** Retries after a failed send: 30 s, 1, 2, 4, 8 min ... then the message is marked failed (kept, shown in the outbox). */
-export const MAX_ATTEMPTS = 6;
-const backoffMs = (attempts: number) => 30_000 * 2 ** (attempts - 1);
+import { backoffMs, MAX_ATTEMPTS } from './retry-schedule.js';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -126,6 +124,25 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     });
     this.kick();
     return true;
+  }
+
+  /**
+   * Queues a message that was marked failed again, with a fresh retry schedule (after the admin has
+   * fixed the mail settings, say). 404 for no such message, 409 for one that is not failed.
+   */
+  async retry(id: string): Promise<{ id: string; status: 'pending' }> {
+    const [row] = await this.db
+      .update(outbox)
+      .set({ status: 'pending', attempts: 0, nextAttemptAt: new Date() })
+      .where(and(eq(outbox.id, id), eq(outbox.status, 'failed')))
+      .returning({ id: outbox.id });
+    if (!row) {
+      const [existing] = await this.db.select({ status: outbox.status }).from(outbox).where(eq(outbox.id, id));
+      if (!existing) throw new NotFoundException('No such message.');
+      throw new ConflictException(`Only a failed message can be queued again; this one is ${existing.status === 'sent' ? 'sent' : 'still being retried'}.`);
+    }
+    this.kick();
+    return { id: row.id, status: 'pending' };
   }
 
   /** Sends soon, without waiting for the next poll. */

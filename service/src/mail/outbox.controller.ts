@@ -6,6 +6,7 @@ import { outbox, type Db } from '@fuelwright/db';
 import type { OutboxMessageDto } from '@fuelwright/shared';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { DB } from '../database/database.tokens.js';
+import { UuidParam } from '../common/uuid-param.js';
 import { MailService } from './mail.service.js';
 import { redactTokenLinks } from './redact-links.js';
 
@@ -53,5 +54,12 @@ export class OutboxController {
   @HttpCode(200)
   async flush(): Promise<{ sent: number }> {
     return { sent: await this.mail.flush() };
+  }
+
+  /** Queues a failed message again, with a fresh retry schedule. */
+  @Post(':id/retry')
+  @HttpCode(200)
+  retry(@UuidParam('id', 'message') id: string): Promise<{ id: string; status: 'pending' }> {
+    return this.mail.retry(id);
   }
 }

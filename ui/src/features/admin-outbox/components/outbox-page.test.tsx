@@ -52,6 +52,30 @@ describe('outbox (admin)', { timeout: 20_000 }, () => {
     expect(frame.getAttribute('srcdoc')).toContain('<a href="http://localhost/invitations/abc">link</a>');
   });
 
+  it('queues a failed message again from its Retry button', async () => {
+    let status: OutboxMessageDto['status'] = 'failed';
+    const retried: string[] = [];
+    mockApi({
+      'GET /auth/me': meReply(makeUser('admin')),
+      'GET /admin/outbox': () => ({
+        status: 200,
+        body: { capturing: true, messages: [message({ id: 'o3', kind: 'comment', subject: 'Cole Coach commented', status, attempts: 31, lastError: '451 try later', sentAt: null })] },
+      }),
+      'POST /admin/outbox/o3/retry': () => {
+        retried.push('o3');
+        status = 'pending';
+        return { status: 200, body: { id: 'o3', status: 'pending' } };
+      },
+    });
+    renderApp('/admin/outbox');
+    const [item] = within(await screen.findByRole('list', { name: 'Messages' })).getAllByRole('listitem');
+    expect(within(item).getByText('Failed')).toBeInTheDocument();
+    await userEvent.setup().click(within(item).getByRole('button', { name: 'Retry: Cole Coach commented' }));
+    expect(await within(item).findByText('Waiting')).toBeInTheDocument();
+    expect(retried).toEqual(['o3']);
+    expect(within(item).queryByRole('button', { name: /^Retry/ })).not.toBeInTheDocument();
+  });
+
   it('says the outbox is for development when the server does not serve it (a real mail service is configured)', async () => {
     mockApi({
       'GET /auth/me': meReply(makeUser('admin')),

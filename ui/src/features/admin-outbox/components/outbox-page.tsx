@@ -8,6 +8,7 @@ import { PageSpinner } from '../../../components/page-spinner';
 import { useNotify } from '../../../components/toaster';
 import { useFlushOutbox } from '../api/flush-outbox';
 import { useOutbox } from '../api/get-outbox';
+import { useRetryOutboxMessage } from '../api/retry-outbox-message';
 import '../outbox.css';
 
 const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'medium' });
@@ -34,6 +35,28 @@ const KIND_LABELS: Record<string, string> = {
 };
 
 type View = 'text' | 'html';
+
+function RetryButton({ message }: { message: OutboxMessageDto }) {
+  const retry = useRetryOutboxMessage();
+  const notify = useNotify();
+  return (
+    <Button
+      className="fw-touch"
+      variant="outlined"
+      intent="danger"
+      icon={<RefreshIcon />}
+      text="Retry"
+      aria-label={`Retry: ${message.subject}`}
+      loading={retry.isPending}
+      onClick={() =>
+        retry.mutate(message.id, {
+          onSuccess: () => notify.success(`Queued again: ${message.subject}`),
+          onError: (error) => notify.error(`Not queued: ${error.message}`),
+        })
+      }
+    />
+  );
+}
 
 function MessageItem({ message }: { message: OutboxMessageDto }) {
   const [open, setOpen] = useState(false);
@@ -70,6 +93,7 @@ function MessageItem({ message }: { message: OutboxMessageDto }) {
             Last error: <span className="fw-break">{message.lastError}</span>
           </Callout>
         )}
+        {message.status === 'failed' && <RetryButton message={message} />}
         <Button
           className="fw-touch fw-outbox-toggle"
           variant="minimal"

@@ -7,6 +7,7 @@ import {
   CARBURETTOR_KINDS,
   IDLE_SCREW_STATES,
   SETUP_RANGES,
+  densityChangePct,
   moistAirDensity,
   type AirFigures,
   type CheckResultValue,
@@ -23,7 +24,6 @@ import {
   MAIN_JET_USUAL_80CC,
   NEEDLE_CLIP_ENDS,
   PILOT_JET_USUAL_80CC,
-  densityChangePct as densityChange,
   needleClipEnd,
   vsUsual,
   type VsUsual,
@@ -106,7 +106,7 @@ export function densityChangeOf(conditions: DiagnosisConditions): number | undef
   if (typeof conditions.densityChangePct === 'number') return conditions.densityChangePct;
   const today = densityOf(conditions.today);
   const then = densityOf(conditions.reference);
-  if (today !== undefined && then !== undefined && then > 0) return densityChange(today, then);
+  if (today !== undefined && then !== undefined && then > 0) return densityChangePct(then, today);
   return undefined;
 }
 

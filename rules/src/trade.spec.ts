@@ -3,7 +3,7 @@
  * small functions in trade.ts, catalog text) and in the ranking it drives.
  */
 import { describe, expect, it } from 'vitest';
-import { THROTTLE_BAND_INFO, THROTTLE_BANDS } from '@fuelwright/shared';
+import { THROTTLE_BAND_INFO, THROTTLE_BANDS, densityChangePct } from '@fuelwright/shared';
 import {
   AIR_SCREW_STEP_TURNS,
   AIR_SCREW_USUAL_TURNS_OUT,
@@ -16,7 +16,6 @@ import {
   PILOT_JET_USUAL_80CC,
   RACING_IDLE_SCREW,
   airScrewEffect,
-  densityChangePct,
   densityEffect,
   idleScrewEffect,
   isPilotJetStep,
@@ -301,8 +300,10 @@ describe('air density', () => {
   });
 
   it('the change is worked out from two densities, positive when today is denser', () => {
-    // Hand-computed: (1.225 - 1.180) / 1.180 * 100 = 3.8136 %.
-    expect(densityChangePct(1.225, 1.18)).toBeCloseTo(3.8136, 4);
+    // Hand-computed: (1.225 - 1.180) / 1.180 * 100 = 3.8136 %. The rules use the one definition in
+    // @fuelwright/shared, which takes the baseline (reference) day first, then today.
+    expect(densityChangePct(1.18, 1.225)).toBeCloseTo(3.8136, 4);
+    expect(densityChangePct(1.225, 1.18)).toBeCloseTo(-3.6735, 4);
     expect(factsOf({}, { conditions: { today: { densityKgM3: 1.225 }, reference: { densityKgM3: 1.18 } } }).get('densityChangePct')).toBeCloseTo(3.8136, 4);
     expect(factsOf({}, { conditions: { densityChangePct: -2, today: { densityKgM3: 1.225 }, reference: { densityKgM3: 1.18 } } }).get('densityChangePct')).toBe(-2);
   });

@@ -117,7 +117,5 @@ export function densityEffect(densityChangePct: number): MixtureChange | 'unchan
   return 'unchanged';
 }
 
-/** Percent change of air density from a reference day to today (positive = denser today). */
-export function densityChangePct(todayKgM3: number, referenceKgM3: number): number {
-  return (100 * (todayKgM3 - referenceKgM3)) / referenceKgM3;
-}
+// The percent change itself is `densityChangePct(baselineKgM3, todayKgM3)` in @fuelwright/shared
+// (air/compute-air.ts): one definition for the rules, the jetting log and the UI.

@@ -167,3 +167,49 @@ describe('e-mail about a new photo', () => {
     expect((await coach.put('/api/me/notifications').send({ 'photo-added': 'off' })).body.fields['photo-added']).toBeDefined();
   });
 });
+
+describe('a coach’s photo and the per-case limit', () => {
+  let t: TestApp;
+  let racer: Agent;
+  let coach: Agent;
+  let c: CaseDto;
+  const png = (shade: string) => sharp({ create: { width: 24, height: 24, channels: 3, background: shade } }).png().toBuffer();
+  beforeAll(async () => {
+    t = await createTestApp();
+    racer = await signedIn(t, demoUser('racer'));
+    coach = await signedIn(t, demoUser('coach'));
+    const kartId = (await racer.get('/api/karts')).body.karts[0].id;
+    c = (await racer.post('/api/cases').send({ kartId, symptoms: ['bog-on-acceleration'] })).body;
+    await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'coach@fuelwright.test', as: 'coach' });
+    const invite = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
+    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+  });
+  afterAll(() => t.close());
+
+  it('takes a photo from the coach the case is shared with; the racer sees it, by the coach, and can open it', async () => {
+    const res = await coach.post(`/api/cases/${c.id}/photos`).attach('file', await png('#405060'), { filename: 'reference.png', contentType: 'image/png' }).field('caption', 'What a good plate looks like');
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ uploaderName: 'Marit Quayle', caption: 'What a good plate looks like' });
+    const listed = (await racer.get(`/api/cases/${c.id}/photos`)).body.photos;
+    expect(listed).toEqual([expect.objectContaining({ id: res.body.id, uploaderName: 'Marit Quayle' })]);
+    expect((await racer.get(listed[0].url)).status).toBe(200);
+    // Someone the case is not shared with cannot add one.
+    const shop = await signedIn(t, demoUser('shop'));
+    expect((await shop.post(`/api/cases/${c.id}/photos`).attach('file', await png('#405060'), { filename: 'x.png', contentType: 'image/png' })).status).toBe(404);
+  });
+
+  it('holds at most 30 photos per case and refuses the 31st, storing nothing', async () => {
+    let held = (await racer.get(`/api/cases/${c.id}/photos`)).body.photos.length;
+    while (held < 30) {
+      const res = await racer.post(`/api/cases/${c.id}/photos`).attach('file', await png('#706050'), { filename: `p${held}.png`, contentType: 'image/png' });
+      expect(res.status).toBe(201);
+      held++;
+    }
+    const before = (await t.db.db.select().from(photos)).length;
+    const over = await coach.post(`/api/cases/${c.id}/photos`).attach('file', await png('#706050'), { filename: 'one-more.png', contentType: 'image/png' });
+    expect(over.status).toBe(400);
+    expect(over.body.message).toMatch(/at most 30 photos/);
+    expect((await t.db.db.select().from(photos)).length).toBe(before);
+    expect((await racer.get(`/api/cases/${c.id}/photos`)).body.photos).toHaveLength(30);
+  });
+});

@@ -40,8 +40,10 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [registerAs('app', () => config)] }),
         CqrsModule.forRoot(),
-        // Limits apply only where a route opts in with @UseGuards(ThrottlerGuard): sign-in, sign-up,
-        // and later the open rank route (the in-memory store slows down when every route uses it).
+        // Limits apply only where a route opts in with @UseGuards(ThrottlerGuard): the account routes
+        // (sign-in, sign-up, e-mail verification, password reset), sending and accepting invitations,
+        // the open rank route (POST /api/diagnosis/rank) and the air calculator (POST /api/conditions/air).
+        // Not every route: the in-memory store slows down when every route uses it.
         ThrottlerModule.forRoot([{ name: 'default', ttl: config.throttleTtlMs, limit: config.throttleLimit }]),
         DatabaseModule.forRoot({ handle: options.database }),
         AccessModule,

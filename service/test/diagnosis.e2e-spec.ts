@@ -68,6 +68,10 @@ describe('diagnosis contract over HTTP', () => {
     // Most probable first.
     const ps = body.causes.map((c: { probability: number }) => c.probability);
     expect([...ps].sort((a, b) => b - a)).toEqual(ps);
+    // "Something else" is not among the causes: the listed probabilities sum to 1 minus its share.
+    expect(body.causes.map((c: { id: string }) => c.id)).not.toContain('something-else');
+    expect(body.somethingElse.probability).toBeGreaterThan(0);
+    expect(ps.reduce((a: number, b: number) => a + b, 0)).toBeCloseTo(1 - body.somethingElse.probability, 9);
     // The top cause says why.
     expect(body.causes[0].reasons.length).toBeGreaterThan(0);
     expect(body.plan.length).toBeGreaterThan(0);
@@ -157,6 +161,25 @@ describe('diagnosis contract over HTTP', () => {
     const ok = rank.responses['200'].content['application/json'].schema;
     expect(ok.required).toEqual(expect.arrayContaining(['version', 'causes', 'plan']));
     expect(Object.keys(ok.properties)).toEqual(expect.arrayContaining(['version', 'causes', 'plan', 'stop']));
+    // Each item names what the contract guarantees; the extras are described, and clients are told to ignore unknown fields.
+    expect(ok.properties.causes.items.required).toEqual(['id', 'label', 'probability', 'reasons']);
+    expect(ok.properties.causes.items.properties.reasons.items.required).toEqual(expect.arrayContaining(['kind', 'text']));
+    expect(ok.properties.plan.items.required).toEqual(['checkId', 'label', 'group', 'minutes', 'cautions']);
+    expect(ok.properties.stop.required).toEqual(['reason']);
+    for (const extra of ['somethingElse', 'excluded', 'expectedMinutes', 'cautions']) expect(ok.properties[extra]?.description, extra).toMatch(/\S/);
+    for (const extra of ['prior', 'logOdds', 'fixes']) expect(ok.properties.causes.items.properties[extra], extra).toBeDefined();
+    for (const extra of ['openingMinutes', 'findProbability', 'causes', 'safetyFirst']) expect(ok.properties.plan.items.properties[extra], extra).toBeDefined();
+    expect(ok.description).toMatch(/must ignore/i);
+    // Every field a response carries today is described (a stop, and a carburettor kind that excludes causes).
+    const sample = (await t.http.post(RANK).send({ symptoms: ['throttle-slow-to-return'], setup: { carburettorKind: 'float-valve' }, results: { 'throttle-return': 'fault-found' } })).body;
+    const open = (await t.http.post(RANK).send({ symptoms: ['bog-on-acceleration'], setup: { carburettorKind: 'pump-around' } })).body;
+    expect(sample.stop).toBeDefined();
+    const missing = (keys: string[], documented: object) => keys.filter((k) => !(k in documented));
+    expect(missing(Object.keys(sample), ok.properties)).toEqual([]);
+    expect(missing(Object.keys(open.causes[0]), ok.properties.causes.items.properties)).toEqual([]);
+    expect(missing(Object.keys(open.causes[0].reasons[0]), ok.properties.causes.items.properties.reasons.items.properties)).toEqual([]);
+    expect(missing(Object.keys(open.plan[0]), ok.properties.plan.items.properties)).toEqual([]);
+    expect(missing(Object.keys(sample.stop), ok.properties.stop.properties)).toEqual([]);
     expect(rank.responses['400']).toBeDefined();
     expect(rank.responses['429']).toBeDefined();
   });

@@ -250,9 +250,20 @@ export interface ExcludedCause {
   reason: string;
 }
 
+/**
+ * The answer of POST /api/diagnosis/rank (and the ranking stored with each case step).
+ * The stable minimum a client may rely on: `version`, `causes[].{id,label,probability,reasons}`,
+ * `plan[].{checkId,label,group,minutes,cautions}` and `stop.reason` when a finding ends the
+ * walk-through. Every response also carries the extras below (`somethingElse`, `excluded`,
+ * `expectedMinutes`, `cautions`; per cause `prior`, `logOdds`, `fixes`; per step `openingMinutes`,
+ * `findProbability`, `causes`, `safetyFirst`). Clients must ignore fields they do not know.
+ * `causes` leaves out the "something else" bucket and the `excluded` causes, so its probabilities
+ * sum to 1 minus `somethingElse.probability`. The OpenAPI schema (service/src/diagnosis/openapi-schemas.ts)
+ * says the same.
+ */
 export interface RankResponse {
   version: string;
-  /** Causes, most probable first. */
+  /** Causes, most probable first; without "something else" and without `excluded`. */
   causes: RankedCause[];
   somethingElse: { label: string; probability: number };
   /** Causes left out because they cannot occur on this carburettor kind. */

@@ -25,7 +25,8 @@ export class DiagnosisController {
   @HttpCode(200)
   @ApiOperation({
     summary: 'Rank likely causes and plan checks (stateless; nothing is saved)',
-    description: 'Symptoms, setup, conditions and check results in; ranked causes with reasons, the check plan, and a stop finding when one applies. Unknown ids answer 400 naming them.',
+    description:
+      'Symptoms, setup, conditions and check results in; ranked causes with reasons, the check plan, and a stop finding when one applies. Unknown ids answer 400 naming them; so does a foam-fitted or rebuild date in the future. Clients must ignore response fields they do not know. Rate-limited per client.',
   })
   @ApiBody({ schema: RANK_REQUEST_SCHEMA })
   @ApiOkResponse({ schema: RANK_RESPONSE_SCHEMA })

@@ -107,40 +107,86 @@ export const RANK_REQUEST_SCHEMA: SchemaObject = {
   example: { symptoms: [{ id: 'bog-on-acceleration', band: 'up-to-quarter' }, 'sporadic-running'], setup: { carburettorKind: 'pump-around' }, results: {} },
 };
 
+const reason: SchemaObject = {
+  type: 'object',
+  required: ['kind', 'text', 'likelihoodRatio', 'logOdds'],
+  description: 'One piece of evidence behind a cause’s probability.',
+  properties: {
+    kind: { type: 'string', enum: ['rule', 'check', 'unexplained'], description: '`rule`: a fired rule; `check`: a check result (Bayes’ rule); `unexplained`: a reported symptom this cause does not usually give' },
+    text: { type: 'string', description: 'One line a racer understands' },
+    likelihoodRatio: { type: 'number', description: 'Factor on the odds of this cause against "something else"' },
+    logOdds: { type: 'number', description: 'Natural log of `likelihoodRatio`' },
+    ruleId: { type: 'string' },
+    checkId: { type: 'string' },
+    symptomId: { type: 'string' },
+  },
+};
+
 export const RANK_RESPONSE_SCHEMA: SchemaObject = {
   type: 'object',
   required: ['version', 'causes', 'plan'],
+  description: [
+    'The stable minimum is `version`, `causes` (`id`, `label`, `probability`, `reasons`), `plan` (`checkId`, `label`, `group`, `minutes`, `cautions`) and, when a finding ends the walk-through, `stop` (`reason`).',
+    'Every response of this version also carries the other fields described here (`somethingElse`, `excluded`, `expectedMinutes`, `cautions`; per cause `prior`, `logOdds`, `fixes`; per step `openingMinutes`, `findProbability`, `causes`, `safetyFirst`).',
+    'Clients must ignore fields they do not know: later versions may add more.',
+    '`causes` leaves out the "something else" bucket (see `somethingElse`) and the causes in `excluded`, so its probabilities sum to 1 minus `somethingElse.probability`.',
+  ].join(' '),
   properties: {
-    version: { type: 'string' },
+    version: { type: 'string', description: 'Ruleset version that ranked the request (as in GET /api/catalog)' },
     causes: {
       type: 'array',
+      description: 'Catalog causes, most probable first; without "something else" and without excluded causes',
       items: {
         type: 'object',
+        required: ['id', 'label', 'probability', 'reasons'],
         properties: {
           id: { type: 'string' },
           label: { type: 'string' },
-          probability: { type: 'number' },
-          reasons: { type: 'array', items: { type: 'object', properties: { kind: { type: 'string' }, text: { type: 'string' }, likelihoodRatio: { type: 'number' }, logOdds: { type: 'number' } } } },
+          probability: { type: 'number', minimum: 0, maximum: 1, description: 'Posterior probability; with `somethingElse.probability` the causes sum to 1' },
+          reasons: { type: 'array', items: reason, description: 'Strongest contributions first' },
+          prior: { type: 'number', description: 'Extra: prior probability before any evidence' },
+          logOdds: { type: 'number', description: 'Extra: log-odds against "something else" after all evidence' },
+          fixes: { type: 'array', items: { type: 'string' }, description: 'Extra: ids of the catalog fixes for this cause' },
         },
       },
     },
-    somethingElse: { type: 'object', properties: { label: { type: 'string' }, probability: { type: 'number' } } },
+    somethingElse: {
+      type: 'object',
+      required: ['label', 'probability'],
+      description: 'Extra: the catch-all bucket (a cause outside the catalog), not listed in `causes`',
+      properties: { label: { type: 'string' }, probability: { type: 'number', minimum: 0, maximum: 1 } },
+    },
+    excluded: {
+      type: 'array',
+      description: 'Extra: causes left out because they cannot occur on the given carburettor kind',
+      items: { type: 'object', required: ['id', 'label', 'reason'], properties: { id: { type: 'string' }, label: { type: 'string' }, reason: { type: 'string' } } },
+    },
     plan: {
       type: 'array',
+      description: 'Checks still to do, in order; empty after a stop finding',
       items: {
         type: 'object',
+        required: ['checkId', 'label', 'group', 'minutes', 'cautions'],
         properties: {
           checkId: { type: 'string' },
           label: { type: 'string' },
-          group: { type: 'string', enum: [...CHECK_GROUPS] },
-          minutes: { type: 'number' },
-          openingMinutes: { type: 'number' },
-          cautions: { type: 'array', items: caution },
+          group: { type: 'string', enum: [...CHECK_GROUPS], description: 'Disassembly group the check needs open' },
+          minutes: { type: 'number', description: 'Minutes of the check itself' },
+          cautions: { type: 'array', items: caution, description: 'Show these before the steps' },
+          openingMinutes: { type: 'number', description: 'Extra: minutes to open the group when this is its first step in the plan, else 0' },
+          findProbability: { type: 'number', minimum: 0, maximum: 1, description: 'Extra: probability this check finds the fault, given the current belief' },
+          causes: { type: 'array', items: { type: 'string' }, description: 'Extra: causes this check tests, most probable first' },
+          safetyFirst: { type: 'boolean', description: 'Extra: placed first for safety, ahead of the cost order' },
         },
       },
     },
-    expectedMinutes: { type: 'number' },
-    cautions: { type: 'array', items: caution },
-    stop: { type: 'object', properties: { reason: { type: 'string' }, checkId: { type: 'string' }, ruleId: { type: 'string' } } },
+    expectedMinutes: { type: 'number', description: 'Extra: expected minutes to find the fault following the plan, group opening included' },
+    cautions: { type: 'array', items: caution, description: 'Extra: cautions raised by the reported symptoms themselves; show them first' },
+    stop: {
+      type: 'object',
+      required: ['reason'],
+      description: 'Present when a finding ends the walk-through: do not drive; see a qualified engine builder',
+      properties: { reason: { type: 'string' }, checkId: { type: 'string' }, ruleId: { type: 'string' } },
+    },
   },
 };

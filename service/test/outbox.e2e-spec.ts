@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { outbox } from '@fuelwright/db';
+import { ConfigService } from '@nestjs/config';
 import { MAX_ATTEMPTS } from '../src/mail/retry-schedule.js';
 import { MailService } from '../src/mail/mail.service.js';
 import { MailCaptureServer } from '../src/mail/mail-capture.server.js';
@@ -64,6 +65,54 @@ describe('a message that failed for good', () => {
     expect(again.body.message).toMatch(/sent/);
     expect((await admin.post('/api/admin/outbox/00000000-0000-4000-8000-000000000000/retry')).status).toBe(404);
     expect((await admin.post('/api/admin/outbox/not-an-id/retry')).status).toBe(404);
+  });
+});
+
+describe('two app instances sending from one database', () => {
+  let t: TestApp;
+  let a: MailService;
+  let b: MailService;
+  beforeAll(async () => {
+    t = await createTestApp();
+    a = t.app.get(MailService);
+    // A second sender on the same database, with its own mailbox, as a second app instance would be.
+    b = new MailService(t.db.db, t.app.get(ConfigService));
+    await b.onApplicationBootstrap();
+  });
+  afterAll(async () => {
+    await b.onApplicationShutdown();
+    await t.close();
+  });
+
+  const queue = async (n: number, tag: string) => {
+    for (let i = 0; i < n; i++) {
+      await a.enqueue(t.db.db, { kind: 'password-reset', toEmail: `${tag}${i}@example.test`, content: { subject: `${tag} ${i}`, paragraphs: ['x'] } });
+    }
+  };
+  const subjects = (tag: string) => [...a.capture!.received, ...b.capture!.received].map((m) => m.subject).filter((s) => s.startsWith(`${tag} `));
+
+  it('sends each message once when both flush at the same time', async () => {
+    await queue(25, 'together');
+    const [sentA, sentB] = await Promise.all([a.flush(), b.flush()]);
+    expect(sentA + sentB).toBe(25);
+    const got = subjects('together');
+    expect(got).toHaveLength(25);
+    expect(new Set(got).size).toBe(25);
+    expect((await t.db.db.select().from(outbox).where(eq(outbox.status, 'pending'))).length).toBe(0);
+  });
+
+  it('leaves a message claimed by a live sender alone, and takes over one whose sender died', async () => {
+    await queue(2, 'leased');
+    const rows = (await t.db.db.select().from(outbox).where(eq(outbox.status, 'pending'))).sort((x, y) => x.toEmail.localeCompare(y.toEmail));
+    expect(rows).toHaveLength(2);
+    // One claimed a minute ago by a sender still within its lease, one by a sender whose lease ran out.
+    await t.db.db.update(outbox).set({ lockedUntil: new Date(Date.now() + 9 * 60_000) }).where(eq(outbox.id, rows[0].id));
+    await t.db.db.update(outbox).set({ lockedUntil: new Date(Date.now() - 1000) }).where(eq(outbox.id, rows[1].id));
+    expect(await b.flush()).toBe(1);
+    expect(subjects('leased')).toEqual(['leased 1']);
+    const after = async (id: string) => (await t.db.db.select().from(outbox).where(eq(outbox.id, id)))[0];
+    expect(await after(rows[0].id)).toMatchObject({ status: 'pending', attempts: 0 });
+    expect(await after(rows[1].id)).toMatchObject({ status: 'sent', attempts: 1, lockedUntil: null });
   });
 });
 

@@ -129,6 +129,8 @@ export const outbox = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     sentAt: timestamp('sent_at', { withTimezone: true }),
     unsubscribable: boolean('unsubscribable').notNull().default(false),
+    /** A sender's lease: set when it claims the row, cleared when it records the outcome; a crashed sender's rows come back once it passes. */
+    lockedUntil: timestamp('locked_until', { withTimezone: true }),
   },
   (t) => [index('outbox_status_next_attempt_idx').on(t.status, t.nextAttemptAt)],
 );

@@ -1,9 +1,9 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { and, asc, eq, lte, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, lt, lte, or, sql } from 'drizzle-orm';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { outbox, users, type Db } from '@fuelwright/db';
+import { outbox, users, type Db, type OutboxRow } from '@fuelwright/db';
 import { NOTICE_KINDS, type NoticeKind, type NoticeSettings } from '@fuelwright/shared';
 import type { AppConfig } from '../config/app.config.js';
 import { DB } from '../database/database.tokens.js';
@@ -11,6 +11,10 @@ import { MailCaptureServer } from './mail-capture.server.js';
 import { renderMail, type MailContent, type MailKind } from './mail-templates.js';
 
 import { backoffMs, MAX_ATTEMPTS } from './retry-schedule.js';
+
+/** Messages one sender claims at a time, and how long its claim holds (well beyond ten slow sends). */
+const CLAIM_BATCH = 10;
+export const CLAIM_LEASE_MS = 10 * 60_000;
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -164,19 +168,43 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     return run;
   }
 
+  /**
+   * Claims due messages for this sender in one statement: rows another sender holds are skipped
+   * (FOR UPDATE SKIP LOCKED) and rows it has leased are left alone, so two app instances on one
+   * database never send a message twice. The lease outlives a batch of slow sends; if a sender
+   * dies holding it, the rows are due again once it has passed.
+   */
+  private async claimDue(): Promise<OutboxRow[]> {
+    const now = new Date();
+    const due = this.db
+      .select({ id: outbox.id })
+      .from(outbox)
+      .where(and(eq(outbox.status, 'pending'), lte(outbox.nextAttemptAt, now), or(isNull(outbox.lockedUntil), lt(outbox.lockedUntil, now))))
+      .orderBy(asc(outbox.createdAt))
+      .limit(CLAIM_BATCH)
+      .for('update', { skipLocked: true });
+    const rows = await this.db
+      .update(outbox)
+      .set({ lockedUntil: new Date(now.getTime() + CLAIM_LEASE_MS) })
+      .where(inArray(outbox.id, due))
+      .returning();
+    return rows.sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime());
+  }
+
   private async sendDue(): Promise<number> {
     if (!this.transport) return 0;
-    const due = await this.db
-      .select()
-      .from(outbox)
-      .where(and(eq(outbox.status, 'pending'), lte(outbox.nextAttemptAt, new Date())))
-      .orderBy(asc(outbox.createdAt))
-      .limit(50);
+    let sent = 0;
+    for (let due = await this.claimDue(); due.length > 0; due = await this.claimDue()) sent += await this.sendClaimed(due);
+    return sent;
+  }
+
+  private async sendClaimed(due: OutboxRow[]): Promise<number> {
+    const transport = this.transport!;
     let sent = 0;
     for (const m of due) {
       try {
         const unsubscribeHeader = m.unsubscribable ? /Stop these e-mails: (\S+)/.exec(m.text)?.[1] : undefined;
-        const info = await this.transport.sendMail({
+        const info = await transport.sendMail({
           from: this.config.mailFrom,
           to: m.toEmail,
           subject: m.subject,
@@ -187,7 +215,7 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
         });
         await this.db
           .update(outbox)
-          .set({ status: 'sent', sentAt: new Date(), attempts: m.attempts + 1, messageId: info.messageId, lastError: null })
+          .set({ status: 'sent', sentAt: new Date(), attempts: m.attempts + 1, messageId: info.messageId, lastError: null, lockedUntil: null })
           .where(eq(outbox.id, m.id));
         sent++;
       } catch (e) {
@@ -200,6 +228,7 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
             lastError: e instanceof Error ? e.message : String(e),
             status: failed ? 'failed' : 'pending',
             nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+            lockedUntil: null,
           })
           .where(eq(outbox.id, m.id));
         this.log.warn(`Sending "${m.subject}" to ${m.toEmail} failed (attempt ${attempts}${failed ? ', giving up' : ''}): ${e instanceof Error ? e.message : e}`);

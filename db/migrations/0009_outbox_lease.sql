@@ -1,0 +1,1 @@
+ALTER TABLE "outbox" ADD COLUMN "locked_until" timestamp with time zone;

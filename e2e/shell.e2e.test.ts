@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Locator } from 'playwright-core';
 import { DESKTOP, PHONE, launchChromium, newPage, recordOutsideRequests, snap } from './browser.js';
 
 const baseUrl = inject('baseUrl');
@@ -11,6 +11,29 @@ const ROLES = [
   { email: 'shop@fuelwright.test', name: 'Gearpit Workshop (invented)', lead: /Work orders for customers/ },
   { email: 'admin@fuelwright.test', name: 'Rune Alder', lead: /Accounts and roles/ },
 ] as const;
+
+/**
+ * Minimum touch target, 44 x 44 CSS px: Apple Human Interface Guidelines (Layout, "at least 44x44
+ * points") and WCAG 2.2 success criterion 2.5.5 Target Size (Enhanced).
+ */
+const TOUCH_PX = 44;
+
+/** Every visible element the locator matches that is smaller than a touch target, described. */
+async function smallTargets(targets: Locator): Promise<string[]> {
+  const small: string[] = [];
+  for (const target of await targets.all()) {
+    if (!(await target.isVisible())) continue;
+    const box = await target.boundingBox();
+    if (!box) continue;
+    if (box.height < TOUCH_PX || box.width < TOUCH_PX) {
+      const name = await target.evaluate(
+        (el) => `${el.tagName.toLowerCase()} "${(el.getAttribute('aria-label') || el.textContent || el.getAttribute('name') || '').trim()}"`,
+      );
+      small.push(`${name}: ${box.width.toFixed(1)} x ${box.height.toFixed(1)} px`);
+    }
+  }
+  return small;
+}
 
 describe('the app shell in Chromium', () => {
   let browser: Browser;
@@ -50,6 +73,37 @@ describe('the app shell in Chromium', () => {
       });
     }
   }
+
+  it('gives the navbar, the phone menu and the sign-in form touch targets of at least 44 px at 390 px', async () => {
+    const { context, page } = await newPage(browser, PHONE, 'light');
+    await page.goto(`${baseUrl}/sign-in`);
+    const form = page.getByRole('form', { name: 'Sign in' });
+    await form.waitFor();
+    const formControls = form.locator('input:not([type=hidden]), button');
+    expect(await formControls.count()).toBeGreaterThanOrEqual(3);
+    expect(await smallTargets(formControls)).toEqual([]);
+    const navbar = page.locator('.fw-navbar');
+    expect(await smallTargets(navbar.locator('button, a'))).toEqual([]);
+
+    await form.getByLabel('E-mail').fill('racer@fuelwright.test');
+    await form.getByLabel('Password', { exact: true }).fill('fuelwright-demo');
+    await form.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Hello, Tamsin Vell' }).waitFor();
+    const navbarTargets = navbar.locator('button, a');
+    expect(await navbarTargets.count()).toBeGreaterThanOrEqual(3);
+    expect(await smallTargets(navbarTargets)).toEqual([]);
+
+    await page.getByRole('button', { name: 'Open menu' }).click();
+    const drawer = page.locator('.fw-nav-drawer');
+    await drawer.getByRole('menuitem').first().waitFor();
+    const menuItems = drawer.getByRole('menuitem');
+    expect(await menuItems.count()).toBeGreaterThanOrEqual(3);
+    expect(await smallTargets(menuItems)).toEqual([]);
+    // The drawer's other controls: close, the theme switch (its label is the target), sign out.
+    expect(await smallTargets(drawer.locator('button, label.fw-theme-switch'))).toEqual([]);
+    await snap(page, 'shell-touch-targets-drawer-phone');
+    await context.close();
+  });
 
   it('lets a visitor sign up (a new racer) and keeps what was typed on an error', async () => {
     const { context, page } = await newPage(browser, DESKTOP, 'light');

@@ -35,9 +35,11 @@ describe('period filter', () => {
     expect(onChange).toHaveBeenLastCalledWith({});
   });
 
-  it('offers no version choice when the page gives no versions', () => {
-    render(<PeriodFilter value={{ from: '2026-11-01' }} onChange={() => {}} idPrefix="p" />);
+  it('offers no version choice when the page gives no versions, and no Clear when the page says so', () => {
+    render(<PeriodFilter value={{ from: '2026-11-01' }} onChange={() => {}} idPrefix="p" clearable={false} />);
     expect(screen.getByRole('group', { name: 'Period' })).toBeInTheDocument();
+    // The page clears everything with its own button.
+    expect(screen.queryByRole('button', { name: 'Clear' })).toBeNull();
     expect(screen.queryByLabelText('Ruleset version')).toBeNull();
     expect(screen.getByLabelText('From')).toHaveValue('2026-11-01');
   });

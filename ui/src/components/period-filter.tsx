@@ -14,12 +14,15 @@ export function PeriodFilter({
   versions,
   allVersionsLabel = 'All versions',
   idPrefix = 'period',
+  clearable = true,
 }: {
   value: Filter;
   onChange: (next: Filter) => void;
   versions?: readonly { version: string; active: boolean }[];
   allVersionsLabel?: string;
   idPrefix?: string;
+  /** Its own "Clear" button (a page with one "Clear filters" for everything turns it off). */
+  clearable?: boolean;
 }) {
   const set = (key: keyof Filter, v: string) => onChange({ ...value, [key]: v || undefined });
   const invalid = value.from && value.to && value.from > value.to ? ['The first day comes after the last.'] : [];
@@ -40,7 +43,7 @@ export function PeriodFilter({
           </HTMLSelect>
         </FormGroup>
       )}
-      {(value.from || value.to || value.version) && (
+      {clearable && (value.from || value.to || value.version) && (
         <div className="fw-period-filter-actions">
           <Button className="fw-touch" size="large" variant="minimal" text="Clear" onClick={() => onChange({})} />
         </div>

@@ -114,6 +114,15 @@ describe('case list', () => {
     expect(router.state.location.search).toBe('?sort=kart');
   });
 
+  it('shows no filters while there is no case at all', async () => {
+    setPhoneWidth(true);
+    api({ 'GET /cases': { status: 200, body: { cases: [] } } });
+    renderApp('/cases');
+    expect(await screen.findByText('No cases yet')).toBeInTheDocument();
+    expect(screen.queryByRole('search', { name: 'Filter cases' })).toBeNull();
+    expect(screen.getByRole('button', { name: 'Go to my karts' })).toHaveAttribute('href', '/karts');
+  });
+
   it('shows cards with a sort control on a phone', async () => {
     setPhoneWidth(true);
     api();

@@ -1,7 +1,7 @@
-import type { ReactNode } from 'react';
+import { useEffect, useRef, type ReactNode } from 'react';
 import { Button, Card, FormGroup, HTMLSelect, HTMLTable, NonIdealState, Spinner } from '@blueprintjs/core';
 import { ArrowDownIcon, ArrowUpIcon, DiagnosisIcon, ErrorIcon, FolderOpenIcon, SwapVerticalIcon } from '@blueprintjs/icons';
-import { generatePath, Link, useSearchParams } from 'react-router-dom';
+import { generatePath, Link, useNavigation, useSearchParams } from 'react-router-dom';
 import { CASE_STATES, CASE_STATE_LABELS, type CaseSummaryDto } from '@fuelwright/shared';
 import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
@@ -169,18 +169,22 @@ export function CasesPage() {
   const phone = useMediaQuery(PHONE_QUERY);
   const labels = catalogLabels(catalog.data);
 
-  const update = (patch: Record<string, string | undefined>) =>
-    setParams(
-      (current) => {
-        const next = new URLSearchParams(current);
-        for (const [key, value] of Object.entries(patch)) {
-          if (value) next.set(key, value);
-          else next.delete(key);
-        }
-        return next;
-      },
-      { replace: true },
-    );
+  // A change made while the address still catches up with the one before builds on that one
+  // (setParams' own updater would see the address of the last render and drop it).
+  const pending = useRef<URLSearchParams | null>(null);
+  const navigation = useNavigation();
+  useEffect(() => {
+    if (navigation.state === 'idle') pending.current = null;
+  }, [navigation.state, params]);
+  const update = (patch: Record<string, string | undefined>) => {
+    const next = new URLSearchParams(pending.current ?? params);
+    for (const [key, value] of Object.entries(patch)) {
+      if (value) next.set(key, value);
+      else next.delete(key);
+    }
+    pending.current = next;
+    setParams(next, { replace: true });
+  };
   const onSort = (key: CaseSortKey) => {
     const next = nextSort(sort, key);
     update({ sort: next.key, dir: next.dir });
@@ -208,68 +212,70 @@ export function CasesPage() {
       lead="Each running problem you worked through: its likely cause, its checks and how it ended."
       actions={<LinkButton className="fw-touch" size="large" icon={<DiagnosisIcon />} to={paths.diagnoseKart} text="Open a new case" />}
     >
-      <div className="fw-filters" role="search" aria-label="Filter cases">
-        <Filter id="cases-state" label="State">
-          <HTMLSelect
-            id="cases-state"
-            large
-            fill
-            value={state ?? ''}
-            onChange={(event) => update({ state: event.currentTarget.value || undefined })}
-            options={[{ value: '', label: 'All states' }, ...CASE_STATES.map((s) => ({ value: s, label: CASE_STATE_LABELS[s] }))]}
-          />
-        </Filter>
-        <Filter id="cases-kart" label="Kart">
-          <HTMLSelect
-            id="cases-kart"
-            large
-            fill
-            value={kartId ?? ''}
-            onChange={(event) => update({ kartId: event.currentTarget.value || undefined })}
-            options={kartOptions}
-          />
-        </Filter>
-        <Filter id="cases-cause" label="Top cause" className="fw-filter-cause">
-          <HTMLSelect
-            id="cases-cause"
-            large
-            fill
-            value={listFilter.cause ?? ''}
-            onChange={(event) => update({ cause: event.currentTarget.value || undefined })}
-            options={causeOptions}
-          />
-        </Filter>
-        <div className="fw-filter-period">
-          <PeriodFilter value={{ from: period.from, to: period.to }} onChange={(next) => update({ from: next.from, to: next.to })} idPrefix="cases-opened" />
-        </div>
-        {phone && (
-          <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
-            <div className="fw-sort-row">
-              <HTMLSelect
-                id="cases-sort"
-                large
-                fill
-                value={sort.key}
-                onChange={(event) => {
-                  const key = event.currentTarget.value as CaseSortKey;
-                  update({ sort: key, dir: firstDirection(key) });
-                }}
-                options={CASE_SORT_KEYS.map((key) => ({ value: key, label: CASE_SORT_LABELS[key] }))}
-              />
-              <Button
-                className="fw-touch"
-                size="large"
-                icon={sort.dir === 'asc' ? <ArrowUpIcon /> : <ArrowDownIcon />}
-                aria-label={sort.dir === 'asc' ? 'Ascending: press for descending' : 'Descending: press for ascending'}
-                onClick={() => update({ dir: sort.dir === 'asc' ? 'desc' : 'asc' })}
-              />
-            </div>
+      {(filtered || cases.isPending || loaded.length > 0) && (
+        <div className="fw-filters" role="search" aria-label="Filter cases">
+          <Filter id="cases-state" label="State">
+            <HTMLSelect
+              id="cases-state"
+              large
+              fill
+              value={state ?? ''}
+              onChange={(event) => update({ state: event.currentTarget.value || undefined })}
+              options={[{ value: '', label: 'All states' }, ...CASE_STATES.map((s) => ({ value: s, label: CASE_STATE_LABELS[s] }))]}
+            />
           </Filter>
-        )}
-        {filtered && (
-          <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Clear filters" onClick={clearAll} />
-        )}
-      </div>
+          <Filter id="cases-kart" label="Kart">
+            <HTMLSelect
+              id="cases-kart"
+              large
+              fill
+              value={kartId ?? ''}
+              onChange={(event) => update({ kartId: event.currentTarget.value || undefined })}
+              options={kartOptions}
+            />
+          </Filter>
+          <Filter id="cases-cause" label="Top cause" className="fw-filter-cause">
+            <HTMLSelect
+              id="cases-cause"
+              large
+              fill
+              value={listFilter.cause ?? ''}
+              onChange={(event) => update({ cause: event.currentTarget.value || undefined })}
+              options={causeOptions}
+            />
+          </Filter>
+          <div className="fw-filter-period">
+            <PeriodFilter value={{ from: period.from, to: period.to }} onChange={(next) => update({ from: next.from, to: next.to })} idPrefix="cases-opened" clearable={false} />
+          </div>
+          {phone && (
+            <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
+              <div className="fw-sort-row">
+                <HTMLSelect
+                  id="cases-sort"
+                  large
+                  fill
+                  value={sort.key}
+                  onChange={(event) => {
+                    const key = event.currentTarget.value as CaseSortKey;
+                    update({ sort: key, dir: firstDirection(key) });
+                  }}
+                  options={CASE_SORT_KEYS.map((key) => ({ value: key, label: CASE_SORT_LABELS[key] }))}
+                />
+                <Button
+                  className="fw-touch"
+                  size="large"
+                  icon={sort.dir === 'asc' ? <ArrowUpIcon /> : <ArrowDownIcon />}
+                  aria-label={sort.dir === 'asc' ? 'Ascending: press for descending' : 'Descending: press for ascending'}
+                  onClick={() => update({ dir: sort.dir === 'asc' ? 'desc' : 'asc' })}
+                />
+              </div>
+            </Filter>
+          )}
+          {filtered && (
+            <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Clear filters" onClick={clearAll} />
+          )}
+        </div>
+      )}
 
       {cases.isPending ? (
         <Spinner aria-label="Loading cases" />

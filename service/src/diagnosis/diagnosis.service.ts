@@ -37,11 +37,22 @@ export class DiagnosisService extends DiagnosisPort implements OnModuleInit {
     this.engines.set(shipped.version, shipped);
     const rows = await this.db.select().from(rulesets).orderBy(asc(rulesets.publishedAt));
     if (!rows.some((r) => r.version === shipped.version)) {
+      // A newly shipped version (it may carry new cautions) takes over from an older shipped one;
+      // a version a shop published from outcomes (it has a parent) stays active until an admin
+      // activates the new one on the rulesets screen.
+      const activeRow = rows.find((r) => r.active);
+      const takeOver = !activeRow || activeRow.parentVersion === null;
       const { version: _v, ...source } = toRulesetSource(shipped.ruleset);
-      await this.db
-        .insert(rulesets)
-        .values({ version: shipped.version, source, notes: 'Shipped expert ruleset', active: !rows.some((r) => r.active) })
-        .onConflictDoNothing();
+      await this.db.transaction(async (tx) => {
+        if (takeOver) await tx.update(rulesets).set({ active: false }).where(eq(rulesets.active, true));
+        await tx
+          .insert(rulesets)
+          .values({ version: shipped.version, source, notes: 'Shipped expert ruleset', active: takeOver })
+          .onConflictDoNothing();
+      });
+      if (!takeOver) {
+        this.log.log(`Ruleset ${shipped.version} shipped; ${activeRow!.version} (published from outcomes) stays active until an admin activates ${shipped.version}`);
+      }
     }
     for (const row of await this.db.select().from(rulesets)) {
       if (!this.engines.has(row.version)) this.engines.set(row.version, buildDiagnosisEngine(validateRuleset(row.source as RulesetSource)));

@@ -140,6 +140,8 @@ describe('sharing a case with a coach', () => {
     expect(res.status).toBe(201);
     // Every new account is a racer account (only an admin changes roles); the share lets it review.
     expect(res.body.user).toMatchObject({ role: 'racer', emailVerified: true });
+    // What was shared, for the page to open next.
+    expect(res.body.shared).toEqual({ caseId: c.id, kartId: c.kartId });
     const seen: CaseDto = (await agent.get(`/api/cases/${c.id}`)).body;
     expect(seen.id).toBe(c.id);
     expect((await agent.get('/api/shared-cases')).body.cases.map((x: { id: string }) => x.id)).toEqual([c.id]);

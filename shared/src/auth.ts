@@ -49,6 +49,8 @@ export interface SignInRequest {
 /** Body of sign-up, sign-in and GET /api/auth/me. */
 export interface SessionResponse {
   user: UserDto;
+  /** Sign-up through an invitation only: what was shared (the case, or the kart when `caseId` is null), to open next. */
+  shared?: { caseId: string | null; kartId: string };
 }
 
 /** GET /api/users (admin). */

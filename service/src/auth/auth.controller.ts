@@ -47,9 +47,9 @@ export class AuthController {
   @ApiOperation({ summary: 'Create a racer account and sign in' })
   @ApiTooManyRequestsResponse({ description: 'Rate-limited' })
   async signUp(@Body() dto: SignUpDto, @Res({ passthrough: true }) res: Response): Promise<SessionResponse> {
-    const { user, token, expiresAt } = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName, dto.invitationToken));
+    const { user, token, expiresAt, shared } = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName, dto.invitationToken));
     this.setCookie(res, token, expiresAt);
-    return { user };
+    return shared ? { user, shared } : { user };
   }
 
   @Public()

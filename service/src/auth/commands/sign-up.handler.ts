@@ -38,14 +38,14 @@ export class SignUpHandler implements ICommandHandler<SignUpCommand> {
     const email = cmd.email.trim().toLowerCase();
     const passwordHash = await hashPassword(cmd.password);
     const row = await this.db.transaction(async (tx) => {
-      let invitation: { shareId: string } | undefined;
+      let invitation: { shareId: string; caseId: string | null; kartId: string } | undefined;
       if (cmd.invitationToken) {
         const t = await this.tokens.consume(tx, 'invitation', cmd.invitationToken);
         if (!t?.shareId) throw new FieldsBadRequest({ invitationToken: ['this invitation link has expired, was already used, or was withdrawn'] });
         if (t.email !== email) throw new FieldsBadRequest({ email: [`use the address the invitation was sent to (${t.email})`] });
         const [s] = await tx.select().from(shares).where(eq(shares.id, t.shareId));
         if (!s || s.revokedAt) throw new FieldsBadRequest({ invitationToken: ['this invitation was withdrawn'] });
-        invitation = { shareId: s.id };
+        invitation = { shareId: s.id, caseId: s.caseId, kartId: s.kartId };
       }
       const [inserted] = await tx
         .insert(users)
@@ -77,9 +77,9 @@ export class SignUpHandler implements ICommandHandler<SignUpCommand> {
           },
         });
       }
-      return inserted;
+      return { inserted, shared: invitation && { caseId: invitation.caseId, kartId: invitation.kartId } };
     });
-    const { token, expiresAt } = await this.sessions.create(row.id);
-    return { user: toUserDto(row), token, expiresAt };
+    const { token, expiresAt } = await this.sessions.create(row.inserted.id);
+    return { user: toUserDto(row.inserted), token, expiresAt, ...(row.shared ? { shared: row.shared } : {}) };
   }
 }

@@ -34,6 +34,20 @@ describe('invitation link', { timeout: 20_000 }, () => {
     expect(body).toEqual({ displayName: 'Cole Coach', email: 'other@example.test', password: 'a long password here', invitationToken: TOKEN });
   });
 
+  it('after signing up through the invitation, opens the shared case (a racer account, like every new one)', async () => {
+    mockApi({
+      'GET /auth/me': meReply(null),
+      'POST /auth/sign-up': { status: 201, body: { user: makeUser('racer', { email: 'c@example.test' }), shared: { caseId: 'c1', kartId: 'k1' } } },
+    });
+    const { router } = renderApp(`/sign-up?invitation=${TOKEN}&next=%2Fshared-cases`);
+    const user = userEvent.setup();
+    await user.type(await screen.findByLabelText('Your name'), 'Cole Coach');
+    await user.type(screen.getByLabelText('E-mail'), 'c@example.test');
+    await user.type(screen.getByLabelText('Password'), 'a long password here');
+    await user.click(screen.getByRole('button', { name: 'Create account' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/cases/c1'));
+  });
+
   it('accepts for a signed-in coach and opens the shared case', async () => {
     const calls = mockApi({
       'GET /auth/me': meReply(makeUser('coach')),

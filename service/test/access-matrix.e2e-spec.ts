@@ -11,6 +11,8 @@ import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp }
  *
  * - The owner does everything.
  * - A coach the kart is shared with (kart scope, which covers its cases) may look: GET answers 200.
+ *   So may a racer-role account that accepted a share (an invited coach signs up as a racer): the
+ *   share grants it, not the role.
  *   Every write answers 404, not 403: the policy treats a write it does not allow exactly like an
  *   unknown id ("No such kart/case."), so a share grants reading and nothing about writing shows.
  * - Everyone else (another racer, a coach it is not shared with, a shop, an admin) gets 404 for
@@ -18,7 +20,7 @@ import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp }
  * Every refused request leaves the kart, its setups, the case and its events as they were.
  */
 type Agent = ReturnType<typeof request.agent>;
-const ACTORS = ['owner', 'racer2', 'sharedCoach', 'otherCoach', 'shop', 'admin'] as const;
+const ACTORS = ['owner', 'racer2', 'sharedCoach', 'sharedRacer', 'otherCoach', 'shop', 'admin'] as const;
 type Actor = (typeof ACTORS)[number];
 
 interface Fixture {
@@ -58,6 +60,7 @@ function expected(row: Row): Record<Actor, number> {
     owner: row.ok,
     racer2: 404,
     sharedCoach: row.read ? 200 : 404,
+    sharedRacer: row.read ? 200 : 404,
     otherCoach: 404,
     shop: 404,
     admin: 404,
@@ -106,6 +109,15 @@ describe('access matrix: actor x action on a racer’s kart and case', () => {
     expect((await as.owner.post('/api/shares').send({ scope: 'kart', kartId, email: 'coach@fuelwright.test', as: 'coach' })).status).toBe(201);
     const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes('coach@fuelwright.test'))!;
     expect((await as.sharedCoach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+    // Someone with no account, invited to the same kart, signs up through the link: a racer account.
+    const before2 = (await flushMail(t)).length;
+    expect((await as.owner.post('/api/shares').send({ scope: 'kart', kartId, email: 'helper@example.test', as: 'coach' })).status).toBe(201);
+    const invite2 = (await flushMail(t)).slice(before2).find((m) => m.to.includes('helper@example.test'))!;
+    as.sharedRacer = request.agent(t.app.getHttpServer());
+    const joined = await as.sharedRacer
+      .post('/api/auth/sign-up')
+      .send({ email: 'helper@example.test', password: 'a long enough password', displayName: 'Helper', invitationToken: linkToken(invite2, '/invitations/') });
+    expect(joined.body.user.role).toBe('racer');
   });
   afterAll(() => t.close());
 

@@ -200,7 +200,8 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     // Each kind of notice can be turned off (the notices' own links do the same for one kind).
     await racer.goto(`${baseUrl}/account/e-mails`);
     await racer.getByRole('checkbox', { name: 'New comments on a case' }).waitFor();
-    expect(await racer.getByRole('checkbox').count()).toBe(5);
+    await racer.getByRole('checkbox', { name: 'A photo added to a case' }).waitFor();
+    expect(await racer.getByRole('checkbox').count()).toBe(6);
     await snapTop(racer, 'review-email-settings-phone');
 
     // The coach sees the answer.
@@ -208,14 +209,15 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await coach.getByRole('region', { name: 'Photos asked for' }).getByText('Answered').waitFor();
   });
 
-  it('the admin’s outbox shows the notices: invitation, comment, check recommended', { timeout: STEP }, async () => {
+  it('the admin’s outbox shows the notices: invitation, comment, check recommended, photo added', { timeout: STEP }, async () => {
     await waitForMail(admin, (m) => m.kind === 'comment' && m.toEmail === RACER && m.createdAt >= sharedAt);
+    await waitForMail(admin, (m) => m.kind === 'photo-added' && m.toEmail === COACH && m.createdAt >= sharedAt);
     await waitForMail(admin, (m) => m.kind === 'check-recommended' && m.toEmail === RACER && m.createdAt >= sharedAt);
     await waitForMail(admin, (m) => m.kind === 'comment' && m.toEmail === COACH && m.createdAt >= sharedAt);
 
     await admin.goto(`${baseUrl}/admin/outbox`);
     const list = admin.getByRole('list', { name: 'Messages' });
-    for (const kind of ['invitation', 'comment', 'check-recommended', 'photo-requested']) {
+    for (const kind of ['invitation', 'comment', 'check-recommended', 'photo-requested', 'photo-added']) {
       await list.locator(`[data-kind="${kind}"]`).first().waitFor();
     }
     const invitation = list.locator('[data-kind="invitation"]').filter({ hasText: 'Tamsin Vell shared a case' }).first();

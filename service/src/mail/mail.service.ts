@@ -9,12 +9,11 @@ import type { AppConfig } from '../config/app.config.js';
 import { DB } from '../database/database.tokens.js';
 import { MailCaptureServer } from './mail-capture.server.js';
 import { renderMail, type MailContent, type MailKind } from './mail-templates.js';
-
 import { backoffMs, MAX_ATTEMPTS } from './retry-schedule.js';
 
 /** Messages one sender claims at a time, and how long its claim holds (well beyond ten slow sends). */
 const CLAIM_BATCH = 10;
-export const CLAIM_LEASE_MS = 10 * 60_000;
+const CLAIM_LEASE_MS = 10 * 60_000;
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 

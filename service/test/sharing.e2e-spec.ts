@@ -147,7 +147,13 @@ describe('sharing a case with a coach', () => {
     expect((await agent.get('/api/shared-cases')).body.cases.map((x: { id: string }) => x.id)).toEqual([c.id]);
     const comment = await agent.post(`/api/cases/${c.id}/comments`).send({ body: 'Send me the plug colour too' });
     expect(comment.status).toBe(201);
-    expect(comment.body).toMatchObject({ authorName: 'New Coach', authorRole: 'racer' });
+    // Beside their name, the part they play on this case (shared with them as coach), not their account role.
+    expect(comment.body).toMatchObject({ authorName: 'New Coach', authorRole: 'coach' });
+    const ownerSays = await racer.post(`/api/cases/${c.id}/comments`).send({ body: 'Plug is tan' });
+    const thread = (await agent.get(`/api/cases/${c.id}/comments`)).body;
+    const list: { authorName: string; authorRole: string }[] = thread.comments ?? thread;
+    expect(list.find((x) => x.authorName === 'New Coach')?.authorRole).toBe('coach');
+    expect(list.find((x) => x.authorName === ownerSays.body.authorName)?.authorRole).toBe('racer');
     const check = seen.rank.plan.at(-1)!.checkId;
     const recommended = await agent.post(`/api/cases/${c.id}/recommendations`).send({ checkId: check, reason: 'Rule this out first' });
     expect(recommended.status).toBe(200);

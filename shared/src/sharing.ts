@@ -52,6 +52,7 @@ export interface CommentDto {
   caseId: string;
   authorId: string | null;
   authorName: string;
+  /** The author's part on this case: the owner is "racer", a grantee what the case was shared with them as (coach or shop). */
   authorRole: string | null;
   body: string;
   createdAt: string;

@@ -23,7 +23,7 @@ export const shares = pgTable(
       .references(() => karts.id, { onDelete: 'cascade' }),
     caseId: uuid('case_id').references(() => cases.id, { onDelete: 'cascade' }),
     inviteeEmail: text('invitee_email').notNull(),
-    /** The role the invitee has for the owner; an account created through the invitation gets it. */
+    /** What the invitee is to the owner (coach or shop): a label on the share and beside their comments; it gives no account role. */
     inviteeRole: roleEnum('invitee_role').notNull(),
     granteeId: uuid('grantee_id').references(() => users.id, { onDelete: 'cascade' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

@@ -24,6 +24,20 @@ export class ReviewContext {
     return loaded!;
   }
 
+  /**
+   * The part someone plays on this case, for the tag beside their name: the owner is the racer, a
+   * grantee is what the owner shared it with them as (coach or shop), whatever their account role;
+   * anyone else shows their account role.
+   */
+  async partsOn(c: LoadedCase): Promise<(userId: string | null, accountRole: string | null) => string | null> {
+    const labels = await this.access.shareLabelsOfCase(c.row.id, c.row.kartId);
+    return (userId, accountRole) => {
+      if (userId === null) return null;
+      if (userId === c.row.ownerId) return 'racer';
+      return labels.get(userId) ?? accountRole;
+    };
+  }
+
   caseUrl(caseId: string): string {
     return `${this.publicUrl}/cases/${caseId}`;
   }

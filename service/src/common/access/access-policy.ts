@@ -76,6 +76,21 @@ export class AccessPolicy {
     return rows.map((r) => r.id!);
   }
 
+  /** What each grantee is to the owner on this case (the share's "as": coach or shop); a kart share counts for its cases. */
+  async shareLabelsOfCase(caseId: string, kartId: string): Promise<Map<string, string>> {
+    const rows = await this.db
+      .select({ id: shares.granteeId, as: shares.inviteeRole })
+      .from(shares)
+      .where(
+        and(
+          isNull(shares.revokedAt),
+          isNotNull(shares.granteeId),
+          or(and(eq(shares.scope, 'kart'), eq(shares.kartId, kartId)), and(eq(shares.scope, 'case'), eq(shares.caseId, caseId))),
+        ),
+      );
+    return new Map(rows.map((r) => [r.id!, r.as]));
+  }
+
   /** `require` for a kart, reading its shares when the user is not its owner. */
   async requireKart<T extends { id: string; ownerId: string }>(subject: Subject, kart: T | undefined, action: Action): Promise<T> {
     if (kart && kart.ownerId !== subject.id) {

@@ -43,7 +43,7 @@ export class AddCommentHandler implements ICommandHandler<AddCommentCommand> {
       caseId,
       authorId: user.id,
       authorName: user.displayName,
-      authorRole: user.role,
+      authorRole: (await this.review.partsOn(c))(user.id, user.role),
       body: row.body,
       createdAt: row.createdAt.toISOString(),
     };

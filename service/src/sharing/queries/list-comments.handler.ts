@@ -14,7 +14,7 @@ export class ListCommentsHandler implements IQueryHandler<ListCommentsQuery> {
   ) {}
 
   async execute({ user, caseId }: ListCommentsQuery) {
-    await this.review.load(user, caseId, 'view');
+    const part = await this.review.partsOn(await this.review.load(user, caseId, 'view'));
     const rows = await this.db
       .select({ c: comments, name: users.displayName, role: users.role })
       .from(comments)
@@ -26,7 +26,7 @@ export class ListCommentsHandler implements IQueryHandler<ListCommentsQuery> {
       caseId,
       authorId: c.authorId,
       authorName: name ?? 'A removed account',
-      authorRole: role ?? null,
+      authorRole: part(c.authorId, role ?? null),
       body: c.body,
       createdAt: c.createdAt.toISOString(),
     }));

@@ -209,6 +209,7 @@ describe('a coach’s photo and the per-case limit', () => {
     const over = await coach.post(`/api/cases/${c.id}/photos`).attach('file', await png('#706050'), { filename: 'one-more.png', contentType: 'image/png' });
     expect(over.status).toBe(400);
     expect(over.body.message).toMatch(/at most 30 photos/);
+    expect(over.body.fields.file[0]).toMatch(/at most 30 photos/);
     expect((await t.db.db.select().from(photos)).length).toBe(before);
     expect((await racer.get(`/api/cases/${c.id}/photos`)).body.photos).toHaveLength(30);
   });

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { BadRequestException, HttpException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { HttpException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { and, asc, count, eq, isNull } from 'drizzle-orm';
 import { cases, photoRequests, photos, users, type Db } from '@fuelwright/db';
@@ -69,7 +69,7 @@ export class PhotosService {
       if (!request) throw new FieldsBadRequest({ photoRequestId: ['no such photo request on this case'] });
     }
     const [{ n }] = await this.db.select({ n: count() }).from(photos).where(eq(photos.caseId, caseId));
-    if (n >= PHOTOS_PER_CASE) throw new BadRequestException(`A case holds at most ${PHOTOS_PER_CASE} photos.`);
+    if (n >= PHOTOS_PER_CASE) throw new FieldsBadRequest({ file: [`a case holds at most ${PHOTOS_PER_CASE} photos`] }, `A case holds at most ${PHOTOS_PER_CASE} photos.`);
     let processed;
     try {
       processed = await processPhoto(file.buffer);

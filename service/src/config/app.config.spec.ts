@@ -58,11 +58,16 @@ describe('configuration read at start-up', () => {
       /SESSION_SECRET is required when NODE_ENV=production/,
     );
     expect(existsSync(join(dataDir, 'session-secret'))).toBe(false);
-    const c = loadAppConfig({ NODE_ENV: 'production', DATA_DIR: dataDir, SESSION_SECRET: GOOD_SECRET });
+    const c = loadAppConfig({ NODE_ENV: 'production', DATA_DIR: dataDir, SESSION_SECRET: GOOD_SECRET, SMTP_URL: 'smtp://mail.example.test:587' });
     expect(c.sessionSecret).toBe(GOOD_SECRET);
     // Production cookies are Secure unless told otherwise.
     expect(c.cookieSecure).toBe(true);
     expect(existsSync(join(dataDir, 'session-secret'))).toBe(false);
+  });
+
+  it('in production requires SMTP_URL, so no mail (with its reset and invitation links) goes to the local capture', () => {
+    expect(() => loadAppConfig({ NODE_ENV: 'production', DATA_DIR: dataDir, SESSION_SECRET: GOOD_SECRET })).toThrow(/SMTP_URL is required when NODE_ENV=production/);
+    expect(loadAppConfig({ DATA_DIR: dataDir, SESSION_SECRET: GOOD_SECRET }).smtpUrl).toBeUndefined();
   });
 
   it('refuses a SESSION_SECRET shorter than 32 characters, in production and in development', () => {

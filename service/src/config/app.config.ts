@@ -101,6 +101,11 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     if (env.NODE_ENV === 'production') throw new ConfigError('SESSION_SECRET is required when NODE_ENV=production');
     sessionSecret = loadOrCreateSecret(dataDir);
   }
+  if (env.NODE_ENV === 'production' && !env.SMTP_URL) {
+    // Without a real mail service, mail would go to the local capture, whose outbox page shows
+    // invitation, verification and reset links in full.
+    throw new ConfigError('SMTP_URL is required when NODE_ENV=production (the local mail capture is for development and tests)');
+  }
   const host = env.HOST || '127.0.0.1';
   return {
     port: int(env, 'PORT', 3000, 0, 65535),

@@ -12,8 +12,23 @@ function Figure({ label, value, note }: { label: string; value: string; note?: s
 }
 
 /** The air figures of one answer, in the viewer's units (densities always in kg/m³). */
-export function AirFigures({ air, units, showStationPressure }: { air: AirResponse; units: UnitPreferences; showStationPressure: boolean }) {
-  const reference = air.reference === 'baseline' ? `of your day’s ${formatDensity(air.referenceDensityKgM3)}` : 'of ISA sea level, 1.225 kg/m³';
+export function AirFigures({
+  air,
+  units,
+  showStationPressure,
+  referenceText,
+}: {
+  air: AirResponse;
+  units: UnitPreferences;
+  showStationPressure: boolean;
+  /** The reference in words ("Blue 27’s session of 12 Nov 2026 (ran right), 1.172 kg/m³"). */
+  referenceText?: string;
+}) {
+  const reference = referenceText
+    ? `against ${referenceText}`
+    : air.reference === 'baseline'
+      ? `against your day’s ${formatDensity(air.referenceDensityKgM3)}`
+      : 'against ISA sea level, 1.225 kg/m³';
   return (
     <div className="fw-figures" aria-label="Air figures">
       <Figure label="Air density" value={formatDensity(air.densityKgM3)} note="Moist air, CIPM-2007" />

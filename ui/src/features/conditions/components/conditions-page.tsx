@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { Button, Callout, Card, FormGroup, H2, SegmentedControl } from '@blueprintjs/core';
+import { Button, Callout, Card, H2 } from '@blueprintjs/core';
 import { CalculatorIcon, CloudIcon } from '@blueprintjs/icons';
 import type { AirRequest } from '@fuelwright/shared';
 import {
@@ -12,17 +12,25 @@ import {
   type AirFormValues,
 } from '../../../components/air-reading-fields';
 import { Page } from '../../../components/page';
-import { TextField } from '../../../components/text-field';
 import { UnitsControl } from '../../../components/units-control';
 import { formErrors } from '../../../lib/form-errors';
 import { useCurrentUser } from '../../../lib/current-user';
 import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { useComputeAir } from '../api/compute-air';
+import { useReferenceSessions } from '../api/get-reference-sessions';
+import {
+  ISA_REFERENCE_TEXT,
+  loadReferenceChoice,
+  sessionReferenceText,
+  storeReferenceChoice,
+  typedReferenceText,
+  type ReferenceChoice,
+} from '../lib/air-reference';
 import { AirFigures } from './air-figures';
 import { HowComputed } from './how-computed';
+import { ReferencePicker } from './reference-picker';
 import '../conditions.css';
 
-type ReferenceKind = 'isa-sea-level' | 'baseline';
 const FORM_FIELDS = [...AIR_API_FIELDS, 'reference.densityKgM3'] as const;
 
 /** Conditions: today's air from temperature, pressure and humidity, open to visitors. */
@@ -30,8 +38,19 @@ export function ConditionsPage() {
   const user = useCurrentUser();
   const { units, setUnits, saveError } = useUnitPreferences();
   const [values, setValues] = useState<AirFormValues>(EMPTY_AIR_FORM);
-  const [referenceKind, setReferenceKind] = useState<ReferenceKind>('isa-sea-level');
-  const [referenceDensity, setReferenceDensity] = useState('');
+  const [storedChoice, setStoredChoice] = useState<ReferenceChoice>(loadReferenceChoice);
+  // A visitor has no logged sessions: a remembered session falls back to ISA sea level.
+  const choice: ReferenceChoice = !user && storedChoice.kind === 'session' ? { kind: 'isa-sea-level' } : storedChoice;
+  const pickReference = (next: ReferenceChoice) => {
+    setStoredChoice(next);
+    storeReferenceChoice(next);
+  };
+  const sessions = useReferenceSessions(Boolean(user) && choice.kind === 'session');
+  const sessionList = sessions.status === 'ready' ? sessions.sessions : [];
+  const selectedSession =
+    choice.kind === 'session' ? (sessionList.find((s) => s.id === choice.sessionId) ?? sessionList[0] ?? null) : null;
+  /** The reference of the figures on screen, in words (set when they are asked for). */
+  const [resultReference, setResultReference] = useState(ISA_REFERENCE_TEXT);
   const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
   const compute = useComputeAir();
   useConvertOnUnitChange(units, setValues);
@@ -43,13 +62,24 @@ export function ConditionsPage() {
     const parsed = parseAirForm(values, units);
     const errs = { ...parsed.errors };
     let reference: AirRequest['reference'];
-    if (referenceKind === 'baseline') {
-      const d = parseDecimal(referenceDensity);
-      if (d === null) errs['reference.densityKgM3'] = ['Enter the air density of your day, in kg/m³ (for example 1.190).'];
-      else reference = { kind: 'baseline', densityKgM3: d };
+    let referenceText = ISA_REFERENCE_TEXT;
+    if (choice.kind === 'typed') {
+      const d = parseDecimal(choice.densityText);
+      if (d === null) errs['reference.densityKgM3'] = ['Enter the reference air density, in kg/m³ (for example 1.190).'];
+      else {
+        reference = { kind: 'baseline', densityKgM3: d };
+        referenceText = typedReferenceText(d);
+      }
+    } else if (choice.kind === 'session') {
+      if (!selectedSession) errs['reference.session'] = ['Pick one of your logged sessions, or another reference.'];
+      else {
+        reference = { kind: 'baseline', densityKgM3: selectedSession.densityKgM3 };
+        referenceText = sessionReferenceText(selectedSession);
+      }
     }
     setClientErrors(errs);
     if (!parsed.reading || Object.keys(errs).length > 0) return;
+    setResultReference(referenceText);
     compute.mutate({ ...parsed.reading, ...(reference ? { reference } : {}) } as AirRequest);
   };
 
@@ -78,31 +108,14 @@ export function ConditionsPage() {
           )}
           {!user && <p className="fw-muted fw-small fw-units-note">Your units are kept in this browser.</p>}
           <AirReadingFields idPrefix="conditions" values={values} onChange={setValues} units={units} errors={errors} />
-          <FormGroup label="Relative air density against">
-            <SegmentedControl
-              aria-label="Relative air density against"
-              size="large"
-              fill
-              options={[
-                { value: 'isa-sea-level', label: 'ISA sea level' },
-                { value: 'baseline', label: 'A day of my own' },
-              ]}
-              value={referenceKind}
-              onValueChange={(v) => setReferenceKind(v as ReferenceKind)}
-            />
-          </FormGroup>
-          {referenceKind === 'baseline' && (
-            <TextField
-              id="conditions-reference-density"
-              label="Air density of that day (kg/m³)"
-              inputMode="decimal"
-              autoComplete="off"
-              value={referenceDensity}
-              onChange={setReferenceDensity}
-              errors={errors('reference.densityKgM3')}
-              hint="From your jetting log, e.g. the day it ran right."
-            />
-          )}
+          <ReferencePicker
+            choice={choice}
+            onChange={pickReference}
+            signedIn={Boolean(user)}
+            sessions={sessions}
+            selected={selectedSession}
+            errors={errors}
+          />
           {server.form && (
             <Callout className="fw-form-error" intent="danger" role="alert">
               {server.form}
@@ -133,10 +146,13 @@ export function ConditionsPage() {
               </ul>
             </Callout>
           )}
-          <AirFigures air={air} units={units} showStationPressure={values.pressureMode === 'elevation'} />
+          <p className="fw-reference-used" data-testid="reference-used">
+            Relative air density against {resultReference}.
+          </p>
+          <AirFigures air={air} units={units} referenceText={resultReference} showStationPressure={values.pressureMode === 'elevation'} />
         </section>
       )}
-      <HowComputed />
+      <HowComputed referenceText={air ? resultReference : undefined} />
     </Page>
   );
 }

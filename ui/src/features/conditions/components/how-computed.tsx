@@ -2,7 +2,7 @@ import { Section, SectionCard } from '@blueprintjs/core';
 import { LearningIcon } from '@blueprintjs/icons';
 
 /** A short account of the formulas behind the figures, with their sources. */
-export function HowComputed() {
+export function HowComputed({ referenceText }: { referenceText?: string }) {
   return (
     <Section
       className="fw-how-computed"
@@ -33,8 +33,9 @@ export function HowComputed() {
             (geopotential metres).
           </li>
           <li>
-            <strong>Relative air density</strong>: today’s density as a percentage of ISA sea level (1.225 kg/m³) or of a day you
-            pick.
+            <strong>Relative air density</strong>: today’s density as a percentage of the reference you pick: ISA sea level
+            (1.225 kg/m³), one of your logged sessions (the density worked out when it was logged), or a density you type.
+            {referenceText && <> The figures above are against {referenceText}.</>}
           </li>
           <li>
             <strong>Power correction factor</strong>: SAE J1349, the JUN1990 equation for spark-ignition engines, CF = 1.18 ×

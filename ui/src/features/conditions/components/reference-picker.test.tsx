@@ -14,12 +14,12 @@ function kart(id: string, name: string): KartDto {
     ownerName: 'Test racer',
     name,
     displacementCc: 100,
-    drive: 'direct',
-    carburettorKind: 'slide',
+    drive: 'direct-drive',
+    carburettorKind: 'float-valve',
     notes: '',
     createdAt: '2026-01-01T10:00:00.000Z',
     updatedAt: '2026-01-01T10:00:00.000Z',
-  } as KartDto;
+  };
 }
 
 function session(id: string, kartId: string, sessionOn: string, ran: JettingSessionDto['ran'], densityKgM3: number, track = 'Club circuit'): JettingSessionDto {
@@ -92,15 +92,17 @@ describe('conditions page: the reference of the relative air density', () => {
     // Ran right first, each group newest first, across both karts.
     expect(Array.from(select.querySelectorAll('optgroup')).map((g) => g.label)).toEqual(['Ran right', 'Ran rich or lean']);
     expect(Array.from(select.options).map((o) => o.value)).toEqual(['s-mid-right', 's-old-right', 's-new-lean']);
-    expect(select.options[1].text).toBe(`Blue 27 · ${day('2026-11-12')} · Club circuit · ran right · 1.172 kg/m³`);
+    expect(select.options[1].text).toBe(`Blue 27 · ${day('2026-11-12')} · 1.172 kg/m³ · ran right · Club circuit`);
     expect(select.value).toBe('s-mid-right');
+    expect(screen.getByTestId('reference-session-detail')).toHaveTextContent(`Red 5, ${day('2026-11-15')} at Hill track: ran right, 1.201 kg/m³`);
     await user.selectOptions(select, 's-old-right');
+    expect(screen.getByTestId('reference-session-detail')).toHaveTextContent(`Blue 27, ${day('2026-11-12')} at Club circuit: ran right, 1.172 kg/m³`);
     await user.click(screen.getByRole('button', { name: 'Work out the air' }));
 
     const figures = await screen.findByLabelText('Air figures');
     const body = JSON.parse(String(calls.find((c) => c.method === 'POST')!.init.body));
     expect(body.reference).toEqual({ kind: 'baseline', densityKgM3: 1.172 });
-    const said = `Blue 27’s session of ${day('2026-11-12')} at Club circuit (ran right), 1.172 kg/m³`;
+    const said = `Blue 27’s session of ${day('2026-11-12')} (ran right), 1.172 kg/m³`;
     expect(screen.getByTestId('reference-used')).toHaveTextContent(`Relative air density against ${said}.`);
     expect(within(figures).getByText(`against ${said}`)).toBeInTheDocument();
     expect(within(figures).getByText('102.3 %')).toBeInTheDocument();

@@ -3,7 +3,7 @@ import { paths } from '../../../app/paths';
 import { LinkButton } from '../../../components/link-button';
 import { TextField } from '../../../components/text-field';
 import type { ReferenceSessionsState } from '../api/get-reference-sessions';
-import { sessionOptionText, type ReferenceChoice, type ReferenceKind, type ReferenceSession } from '../lib/air-reference';
+import { sessionDetailText, sessionOptionText, type ReferenceChoice, type ReferenceKind, type ReferenceSession } from '../lib/air-reference';
 
 /**
  * What the relative air density is measured against. Visitors pick ISA sea level or type a
@@ -107,7 +107,16 @@ function SessionSelect({
                   {m}
                 </span>
               ))
-            : 'Sessions that ran right come first, newest first. The air density is the one worked out when the session was logged.'}
+            : (
+                <>
+                  {selected && (
+                    <span className="fw-reference-detail" data-testid="reference-session-detail">
+                      {sessionDetailText(selected)}
+                    </span>
+                  )}
+                  Sessions that ran right come first, newest first; the density is the one worked out when the session was logged.
+                </>
+              )}
         </span>
       }
     >

@@ -52,15 +52,23 @@ export function formatSessionDay(isoDay: string): string {
   return Number.isNaN(date.getTime()) ? isoDay : date.toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 }
 
-/** One line of the session select: kart, day, track, how it ran, density. */
+/**
+ * One line of the session select: kart, day, density, how it ran, track (the track last, since a
+ * phone-width select cuts the end off; the line under the select repeats it whole).
+ */
 export function sessionOptionText(s: ReferenceSession): string {
-  return [s.kartName, formatSessionDay(s.sessionOn), s.track || 'no track given', `ran ${s.ran}`, formatDensity(s.densityKgM3)].join(' · ');
+  return [s.kartName, formatSessionDay(s.sessionOn), formatDensity(s.densityKgM3), `ran ${s.ran}`, s.track || 'no track given'].join(' · ');
+}
+
+/** The picked session whole, under the select: "Blue 27, 12 Nov 2026 at Club circuit: ran right, 1.172 kg/m³". */
+export function sessionDetailText(s: ReferenceSession): string {
+  const track = s.track ? ` at ${s.track}` : '';
+  return `${s.kartName}, ${formatSessionDay(s.sessionOn)}${track}: ran ${s.ran}, ${formatDensity(s.densityKgM3)}`;
 }
 
 /** What the figures were measured against, in words, e.g. "Blue 27’s session of 12 Nov 2026 (ran right), 1.172 kg/m³". */
 export function sessionReferenceText(s: ReferenceSession): string {
-  const track = s.track ? ` at ${s.track}` : '';
-  return `${s.kartName}’s session of ${formatSessionDay(s.sessionOn)}${track} (ran ${s.ran}), ${formatDensity(s.densityKgM3)}`;
+  return `${s.kartName}’s session of ${formatSessionDay(s.sessionOn)} (ran ${s.ran}), ${formatDensity(s.densityKgM3)}`;
 }
 
 export const ISA_REFERENCE_TEXT = `ISA sea level, ${formatDensity(ISA_SEA_LEVEL_DENSITY)}`;

@@ -127,7 +127,7 @@ export interface SharedCaseSummaryDto {
   pendingPhotoRequests: number;
 }
 
-export const NOTICE_KINDS = ['invitation', 'comment', 'check-recommended', 'photo-requested', 'photo-added', 'case-resolved'] as const;
+export const NOTICE_KINDS = ['invitation', 'comment', 'check-recommended', 'photo-requested', 'photo-added', 'case-resolved', 'case-progress'] as const;
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 export const NOTICE_LABELS: Record<NoticeKind, string> = {
   invitation: 'Invitations to review a case',
@@ -136,6 +136,7 @@ export const NOTICE_LABELS: Record<NoticeKind, string> = {
   'photo-requested': 'A photo requested on your case',
   'photo-added': 'A photo added to a case',
   'case-resolved': 'A shared case resolved',
+  'case-progress': 'Progress on a shared case',
 };
 
 /** Per-user e-mail settings: a kind set to false is not sent. Account e-mails (verification, reset) always are. */

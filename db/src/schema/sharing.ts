@@ -1,4 +1,4 @@
-import { boolean, index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { cases } from './cases.js';
 import { karts } from './karts.js';
 import { roleEnum, users } from './users.js';
@@ -131,6 +131,13 @@ export const outbox = pgTable(
     unsubscribable: boolean('unsubscribable').notNull().default(false),
     /** A sender's lease: set when it claims the row, cleared when it records the outcome; a crashed sender's rows come back once it passes. */
     lockedUntil: timestamp('locked_until', { withTimezone: true }),
+    /**
+     * Set on a message held back to gather several steps (a case's progress for one recipient):
+     * while it waits (`next_attempt_at` still ahead, never tried), a later step with the same key
+     * and recipient rewrites it, appending to `coalesced_steps`, instead of queuing another.
+     */
+    coalesceKey: text('coalesce_key'),
+    coalescedSteps: jsonb('coalesced_steps').$type<string[]>(),
   },
   (t) => [index('outbox_status_next_attempt_idx').on(t.status, t.nextAttemptAt)],
 );

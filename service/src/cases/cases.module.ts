@@ -5,6 +5,7 @@ import { CasesController } from './cases.controller.js';
 import { CaseRanking } from './case-ranking.js';
 import { CaseStore } from './case-store.js';
 import { CaseAudience } from './case-audience.js';
+import { CaseProgressNotices } from './case-progress-notices.js';
 import { AbandonCaseHandler } from './commands/abandon-case.handler.js';
 import { CorrectCaseFactsHandler } from './commands/correct-case-facts.handler.js';
 import { OpenCaseHandler } from './commands/open-case.handler.js';
@@ -28,7 +29,7 @@ const handlers = [
 @Module({
   imports: [DiagnosisModule, JettingModule],
   controllers: [CasesController],
-  providers: [CaseStore, CaseRanking, CaseAudience, ...handlers],
+  providers: [CaseStore, CaseRanking, CaseAudience, CaseProgressNotices, ...handlers],
   exports: [CaseStore, CaseRanking, CaseAudience],
 })
 export class CasesModule {}

@@ -1,7 +1,7 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { and, asc, eq, inArray, isNull, lt, lte, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, inArray, isNull, lt, lte, or, sql } from 'drizzle-orm';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { outbox, users, type Db, type OutboxRow } from '@fuelwright/db';
 import { NOTICE_KINDS, type NoticeKind, type NoticeSettings } from '@fuelwright/shared';
@@ -22,6 +22,21 @@ export interface QueuedMail {
   toEmail: string;
   toUserId?: string | null;
   content: MailContent;
+}
+
+/**
+ * A notice gathered over a hold: while it waits, later steps with the same `key` to the same
+ * address rewrite it (`content` renders every step so far) instead of queuing another message.
+ */
+export interface CoalescedMail {
+  kind: NoticeKind;
+  toEmail: string;
+  toUserId: string;
+  /** What the steps belong to, e.g. `case-progress:<case id>`. */
+  key: string;
+  step: string;
+  holdMs: number;
+  content: (steps: string[]) => MailContent;
 }
 
 const isNotice = (k: MailKind): k is NoticeKind => (NOTICE_KINDS as readonly string[]).includes(k);
@@ -109,12 +124,8 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
    * is not queued. Returns whether it was queued.
    */
   async enqueue(tx: Db | Tx, mail: QueuedMail): Promise<boolean> {
-    let unsubscribeUrl: string | undefined;
-    if (isNotice(mail.kind) && mail.toUserId) {
-      const settings = await this.noticeSettings(mail.toUserId, tx);
-      if (settings[mail.kind] === false) return false;
-      unsubscribeUrl = `${this.config.publicUrl}/unsubscribe?token=${this.unsubscribeToken(mail.toUserId, mail.kind)}`;
-    }
+    const unsubscribeUrl = await this.unsubscribeUrlFor(tx, mail);
+    if (unsubscribeUrl === false) return false;
     const { subject, text, html } = renderMail(mail.content, unsubscribeUrl);
     await tx.insert(outbox).values({
       kind: mail.kind,
@@ -127,6 +138,74 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     });
     this.kick();
     return true;
+  }
+
+  /** The unsubscribe link a notice carries; false when its recipient turned that kind off. */
+  private async unsubscribeUrlFor(tx: Db | Tx, mail: { kind: MailKind; toUserId?: string | null }): Promise<string | undefined | false> {
+    if (!isNotice(mail.kind) || !mail.toUserId) return undefined;
+    const settings = await this.noticeSettings(mail.toUserId, tx);
+    if (settings[mail.kind] === false) return false;
+    return `${this.config.publicUrl}/unsubscribe?token=${this.unsubscribeToken(mail.toUserId, mail.kind)}`;
+  }
+
+  /**
+   * Queues a notice held for `holdMs` inside the caller's transaction, or adds the step to the one
+   * still held for the same key and address (never tried, not claimed by a sender: the row is
+   * locked here, and a sender skips locked rows). The hold runs from the first step, so a busy
+   * session at the track still reaches the recipient within one hold. Returns 'queued', 'added'
+   * or false (the recipient turned the kind off).
+   */
+  async enqueueCoalesced(tx: Db | Tx, mail: CoalescedMail): Promise<'queued' | 'added' | false> {
+    const unsubscribeUrl = await this.unsubscribeUrlFor(tx, mail);
+    if (unsubscribeUrl === false) return false;
+    const now = new Date();
+    const [held] = await tx
+      .select({ id: outbox.id, steps: outbox.coalescedSteps })
+      .from(outbox)
+      .where(
+        and(
+          eq(outbox.coalesceKey, mail.key),
+          eq(outbox.toEmail, mail.toEmail),
+          eq(outbox.kind, mail.kind),
+          eq(outbox.status, 'pending'),
+          eq(outbox.attempts, 0),
+          gt(outbox.nextAttemptAt, now),
+          or(isNull(outbox.lockedUntil), lt(outbox.lockedUntil, now)),
+        ),
+      )
+      .orderBy(desc(outbox.createdAt))
+      .limit(1)
+      .for('update');
+    const steps = [...(held?.steps ?? []), mail.step];
+    const { subject, text, html } = renderMail(mail.content(steps), unsubscribeUrl);
+    if (held) {
+      await tx.update(outbox).set({ subject, text, html, coalescedSteps: steps }).where(eq(outbox.id, held.id));
+      return 'added';
+    }
+    await tx.insert(outbox).values({
+      kind: mail.kind,
+      toEmail: mail.toEmail,
+      toUserId: mail.toUserId,
+      subject,
+      text,
+      html,
+      unsubscribable: Boolean(unsubscribeUrl),
+      nextAttemptAt: new Date(now.getTime() + mail.holdMs),
+      coalesceKey: mail.key,
+      coalescedSteps: steps,
+    });
+    return 'queued';
+  }
+
+  /** Ends the hold on every message still gathering steps under `key`: they go with the next send. */
+  async releaseHeld(tx: Db | Tx, key: string): Promise<void> {
+    const now = new Date();
+    const released = await tx
+      .update(outbox)
+      .set({ nextAttemptAt: now })
+      .where(and(eq(outbox.coalesceKey, key), eq(outbox.status, 'pending'), eq(outbox.attempts, 0), gt(outbox.nextAttemptAt, now)))
+      .returning({ id: outbox.id });
+    if (released.length > 0) this.kick();
   }
 
   /**
@@ -153,14 +232,17 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     if (this.config.mailPollMs > 0) setImmediate(() => void this.flush().catch((e) => this.log.error(e)));
   }
 
-  /** Sends every due message once; returns how many were sent. Runs one at a time. */
-  flush(): Promise<number> {
-    if (this.running) return this.running.then(() => this.flushNow());
-    return this.flushNow();
+  /**
+   * Sends every due message once; returns how many were sent. Runs one at a time. `asOf` (tests,
+   * and nothing else) sends what will be due by then, such as a notice still held to gather steps.
+   */
+  flush(opts: { asOf?: Date } = {}): Promise<number> {
+    if (this.running) return this.running.then(() => this.flushNow(opts.asOf));
+    return this.flushNow(opts.asOf);
   }
 
-  private flushNow(): Promise<number> {
-    const run = this.sendDue().finally(() => {
+  private flushNow(asOf?: Date): Promise<number> {
+    const run = this.sendDue(asOf).finally(() => {
       if (this.running === run) this.running = undefined;
     });
     this.running = run;
@@ -173,12 +255,12 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
    * database never send a message twice. The lease outlives a batch of slow sends; if a sender
    * dies holding it, the rows are due again once it has passed.
    */
-  private async claimDue(): Promise<OutboxRow[]> {
+  private async claimDue(asOf?: Date): Promise<OutboxRow[]> {
     const now = new Date();
     const due = this.db
       .select({ id: outbox.id })
       .from(outbox)
-      .where(and(eq(outbox.status, 'pending'), lte(outbox.nextAttemptAt, now), or(isNull(outbox.lockedUntil), lt(outbox.lockedUntil, now))))
+      .where(and(eq(outbox.status, 'pending'), lte(outbox.nextAttemptAt, asOf ?? now), or(isNull(outbox.lockedUntil), lt(outbox.lockedUntil, now))))
       .orderBy(asc(outbox.createdAt))
       .limit(CLAIM_BATCH)
       .for('update', { skipLocked: true });
@@ -190,14 +272,15 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     return rows.sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime());
   }
 
-  private async sendDue(): Promise<number> {
+  private async sendDue(asOf?: Date): Promise<number> {
     if (!this.transport) return 0;
     let sent = 0;
-    for (let due = await this.claimDue(); due.length > 0; due = await this.claimDue()) sent += await this.sendClaimed(due);
+    for (let due = await this.claimDue(asOf); due.length > 0; due = await this.claimDue(asOf)) sent += await this.sendClaimed(due, asOf);
     return sent;
   }
 
-  private async sendClaimed(due: OutboxRow[]): Promise<number> {
+  /** A failed send waits its backoff from `asOf` when given, so one flush never retries it at once. */
+  private async sendClaimed(due: OutboxRow[], asOf?: Date): Promise<number> {
     const transport = this.transport!;
     let sent = 0;
     for (const m of due) {
@@ -226,7 +309,7 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
             attempts,
             lastError: e instanceof Error ? e.message : String(e),
             status: failed ? 'failed' : 'pending',
-            nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+            nextAttemptAt: new Date(Math.max(Date.now(), asOf?.getTime() ?? 0) + backoffMs(attempts)),
             lockedUntil: null,
           })
           .where(eq(outbox.id, m.id));

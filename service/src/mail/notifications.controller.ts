@@ -16,6 +16,7 @@ export class NoticeSettingsDto implements NoticeSettings {
   @ApiPropertyOptional({ name: 'photo-requested' }) @IsOptional() @IsBoolean(msg('photo-requested')) 'photo-requested'?: boolean;
   @ApiPropertyOptional({ name: 'photo-added' }) @IsOptional() @IsBoolean(msg('photo-added')) 'photo-added'?: boolean;
   @ApiPropertyOptional({ name: 'case-resolved' }) @IsOptional() @IsBoolean(msg('case-resolved')) 'case-resolved'?: boolean;
+  @ApiPropertyOptional({ name: 'case-progress' }) @IsOptional() @IsBoolean(msg('case-progress')) 'case-progress'?: boolean;
 }
 
 export class UnsubscribeDto {

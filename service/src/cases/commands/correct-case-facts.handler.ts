@@ -5,6 +5,7 @@ import { FieldsBadRequest } from '../../common/validation.js';
 import { AirDensityBaseline } from '../../jetting/air-density-baseline.js';
 import { withDensityChange } from '../case-conditions.js';
 import { CaseRanking } from '../case-ranking.js';
+import { CaseProgressNotices, progressLine } from '../case-progress-notices.js';
 import { CaseStore, type NewCaseEvent } from '../case-store.js';
 import { factsOf, loadForStep } from '../case-step.js';
 import { CorrectCaseFactsCommand } from './correct-case-facts.command.js';
@@ -21,6 +22,7 @@ export class CorrectCaseFactsHandler implements ICommandHandler<CorrectCaseFacts
     private readonly access: AccessPolicy,
     private readonly ranking: CaseRanking,
     private readonly airBaseline: AirDensityBaseline,
+    private readonly progress: CaseProgressNotices,
   ) {}
 
   async execute({ user, caseId, input }: CorrectCaseFactsCommand) {
@@ -35,7 +37,10 @@ export class CorrectCaseFactsHandler implements ICommandHandler<CorrectCaseFacts
     const rank = await this.ranking.rank({ ...facts, setup, conditions }, l.row.rulesetVersion);
     const events: NewCaseEvent[] = [{ type: 'facts-corrected', payload: { setup, conditions, rank } }];
     if (rank.stop) events.push({ type: 'stopped', payload: { stop: rank.stop } });
-    await this.store.append(l, user.id, events);
+    const to = await this.progress.recipients(l, user);
+    const what = input.setup && input.conditions ? 'Setup and air corrected' : input.setup ? 'Setup corrected' : 'Air corrected';
+    const line = progressLine(what, rank);
+    await this.store.append(l, user.id, events, (tx) => this.progress.queue(tx, l, user, to, line, Boolean(rank.stop)));
     return this.store.dto(await this.store.mustLoad(caseId));
   }
 }

@@ -5,6 +5,7 @@ import { FieldsBadRequest } from '../../common/validation.js';
 import { CaseRanking } from '../case-ranking.js';
 import { CaseStore } from '../case-store.js';
 import { CaseAudience } from '../case-audience.js';
+import { CaseProgressNotices } from '../case-progress-notices.js';
 import { MailService } from '../../mail/mail.service.js';
 import { loadForStep } from '../case-step.js';
 import { ResolveCaseCommand } from './resolve-case.command.js';
@@ -17,6 +18,7 @@ export class ResolveCaseHandler implements ICommandHandler<ResolveCaseCommand> {
     private readonly ranking: CaseRanking,
     private readonly audience: CaseAudience,
     private readonly mail: MailService,
+    private readonly progress: CaseProgressNotices,
   ) {}
 
   async execute({ user, caseId, input }: ResolveCaseCommand) {
@@ -28,6 +30,8 @@ export class ResolveCaseHandler implements ICommandHandler<ResolveCaseCommand> {
     const to = await this.audience.of({ caseId, kartId: l.row.kartId, ownerId: l.row.ownerId }, user.id);
     const cause = input.causeId === SOMETHING_ELSE_ID ? 'something else' : (this.ranking.causeLabel(input.causeId, l.row.rulesetVersion) ?? input.causeId);
     await this.store.append(l, user.id, [{ type: 'resolved', payload: { causeId: input.causeId, fix, note: input.note?.trim() ?? '' } }], async (tx) => {
+      // Resolving is told by its own notice, not as progress; steps still held go out first.
+      await this.progress.release(tx, caseId);
       for (const r of to) {
         await this.mail.enqueue(tx, {
           kind: 'case-resolved',

@@ -30,6 +30,7 @@ const KIND_LABELS: Record<string, string> = {
   'photo-requested': 'Photo requested',
   'photo-added': 'Photo added',
   'case-resolved': 'Case resolved',
+  'case-progress': 'Case progress',
   'email-verification': 'Address confirmation',
   'password-reset': 'Password reset',
 };

@@ -123,6 +123,17 @@ describe('progress on a shared case, by e-mail', () => {
     expect(mails[0].text).toContain('- Case abandoned (Out of time). Top cause now:');
   });
 
+  it('does not hold a step that stops the walk-through: the coach hears at the next send', async () => {
+    // A throttle that does not return to closed is a reason not to drive: common practice, no
+    // published source (the shipped ruleset's stop-findings.json carries it).
+    const c: CaseDto = (await racer.post('/api/cases').send({ kartId, symptoms: ['throttle-slow-to-return'] })).body;
+    const before = await sentCount();
+    expect((await racer.post(`/api/cases/${c.id}/results`).send({ checkId: 'throttle-return', result: 'fault-found' })).status).toBe(200);
+    const mails = await progressSince(before, { afterHold: false });
+    expect(mails).toHaveLength(1);
+    expect(mails[0].text).toMatch(/- Recorded: .+ — fault found\..* The walk-through stopped: .*throttle/i);
+  });
+
   it('on resolving, sends the held progress at once and the resolved notice, with no progress line for the resolution', async () => {
     const c = await openCase();
     const before = await sentCount();

@@ -131,5 +131,10 @@ describe('account e-mail links', { timeout: 20_000 }, () => {
     await userEvent.setup().click(comments);
     await waitFor(() => expect(screen.getByRole('checkbox', { name: 'New comments on a case' })).toBeChecked());
     expect(calls.find((c) => c.method === 'PUT')!.init.body).toBe(JSON.stringify({ comment: true }));
+    // One switch per kind, progress on a shared case among them.
+    expect(screen.getAllByRole('checkbox')).toHaveLength(7);
+    await userEvent.setup().click(screen.getByRole('checkbox', { name: 'Progress on a shared case' }));
+    await waitFor(() => expect(screen.getByRole('checkbox', { name: 'Progress on a shared case' })).not.toBeChecked());
+    expect(calls.filter((c) => c.method === 'PUT').at(-1)!.init.body).toBe(JSON.stringify({ 'case-progress': false }));
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { computeAir, suggestJets } from '@fuelwright/shared';
+import { computeAir, suggestJets, type JettingSessionDto } from '@fuelwright/shared';
 import { DESKTOP, PHONE, POLL, SCREENSHOT_DIR, dismissToasts, launchChromium, newPage, recordOutsideRequests, snap, snapPart, snapTop } from './browser.js';
 
 const RACER = { email: 'racer@fuelwright.test', password: 'fuelwright-demo' };
@@ -251,6 +251,36 @@ describe('jetting in the browser', () => {
     expect(
       (await page.request.put(`${baseUrl}/api/me/preferences`, { data: { units: { temperature: 'C', pressure: 'hPa', length: 'm' } } })).status(),
     ).toBe(200);
+
+    // The conditions page measures today's air against a logged session: the one of a week ago.
+    const karts = (await (await page.request.get(`${baseUrl}/api/karts`)).json()).karts as { id: string }[];
+    const allSessions: JettingSessionDto[] = [];
+    for (const k of karts) allSessions.push(...(await (await page.request.get(`${baseUrl}/api/karts/${k.id}/sessions`)).json()).sessions);
+    const weekAgo = allSessions.find((s) => s.kartId === kartId && s.sessionOn === daysAgo(8))!;
+    await page.goto(`${baseUrl}/conditions`);
+    const airForm = page.getByRole('form', { name: 'Today’s air' });
+    await airForm.locator('#conditions-temperature').fill('20');
+    await airForm.locator('#conditions-humidity').fill('50');
+    await airForm.locator('#conditions-station-pressure').fill('1013.25');
+    await airForm.getByRole('radio', { name: 'Logged session' }).click();
+    const picker = airForm.locator('#conditions-reference-session');
+    await expect.poll(() => picker.isEnabled(), POLL).toBe(true);
+    // Every session of every kart of the racer, those that ran right first, each group newest first.
+    const newestFirst = (x: JettingSessionDto, y: JettingSessionDto) => y.sessionOn.localeCompare(x.sessionOn) || y.createdAt.localeCompare(x.createdAt);
+    const expectedOrder = [...allSessions.filter((s) => s.ran === 'right').sort(newestFirst), ...allSessions.filter((s) => s.ran !== 'right').sort(newestFirst)];
+    expect(await picker.locator('option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value))).toEqual(expectedOrder.map((s) => s.id));
+    await picker.selectOption(weekAgo.id);
+    await airForm.getByRole('button', { name: 'Work out the air' }).click();
+    const used = page.getByTestId('reference-used');
+    await used.waitFor();
+    expect(await used.textContent()).toMatch(
+      new RegExp(`^Relative air density against Browser test kart’s session of .+ \\(ran right\\), ${weekAgo.densityKgM3.toFixed(3)} kg/m³\\.$`),
+    );
+    // Today's CIPM-2007 density (Picard et al., Metrologia 45 (2008) 149, as computeAir implements it) over the
+    // density stored with that session.
+    const relative = (100 * computeAir({ temperatureC: 20, stationPressureHpa: 1013.25, relativeHumidityPct: 50 }).densityKgM3) / weekAgo.densityKgM3;
+    await page.getByLabel('Air figures').getByText(`${relative.toFixed(1)} %`, { exact: true }).waitFor();
+    await snap(page, 'conditions-session-reference-desktop');
     await context.close();
 
     for (const [name, viewport] of [

@@ -201,7 +201,8 @@ describe('remote review in the browser: share, accept, comment, recommend, photo
     await racer.goto(`${baseUrl}/account/e-mails`);
     await racer.getByRole('checkbox', { name: 'New comments on a case' }).waitFor();
     await racer.getByRole('checkbox', { name: 'A photo added to a case' }).waitFor();
-    expect(await racer.getByRole('checkbox').count()).toBe(6);
+    await racer.getByRole('checkbox', { name: 'Progress on a shared case' }).waitFor();
+    expect(await racer.getByRole('checkbox').count()).toBe(7);
     await snapTop(racer, 'review-email-settings-phone');
 
     // The coach sees the answer.

@@ -18,6 +18,7 @@ import { DiagnosisModule } from './diagnosis/diagnosis.module.js';
 import { ConditionsModule } from './conditions/conditions.module.js';
 import { JettingModule } from './jetting/jetting.module.js';
 import { PreferencesModule } from './preferences/preferences.module.js';
+import { DemoModule } from './demo/demo.module.js';
 import { AccessModule } from './common/access/access.module.js';
 import { HealthController } from './health/health.controller.js';
 import { SessionGuard } from './common/guards/session.guard.js';
@@ -40,6 +41,10 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [registerAs('app', () => config)] }),
         CqrsModule.forRoot(),
+        // Right after CqrsModule and before anything that brings in MailModule: all three are global, and
+        // global modules' bootstrap hooks run in the order they are first imported. The demo history
+        // needs the command handlers registered and must be written before the mail sender starts.
+        DemoModule,
         // Limits apply only where a route opts in with @UseGuards(ThrottlerGuard): the account routes
         // (sign-in, sign-up, e-mail verification, password reset), sending and accepting invitations,
         // the open rank route (POST /api/diagnosis/rank) and the air calculator (POST /api/conditions/air).

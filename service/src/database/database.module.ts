@@ -4,7 +4,10 @@ import { openDatabase, seedDemoIfEmpty, type DatabaseHandle } from '@fuelwright/
 import { join } from 'node:path';
 import type { AppConfig } from '../config/app.config.js';
 import { hashPassword } from '../auth/password.js';
-import { DB, DB_HANDLE } from './database.tokens.js';
+import { DB, DB_HANDLE, DEMO_JUST_SEEDED } from './database.tokens.js';
+
+/** Handles whose opening just seeded the demo club (DEMO_JUST_SEEDED reads it). */
+const justSeeded = new WeakSet<DatabaseHandle>();
 
 export interface DatabaseModuleOptions {
   /** An already opened and migrated database (tests hand one in). */
@@ -21,6 +24,7 @@ async function openConfigured(config: AppConfig): Promise<DatabaseHandle> {
   log.log(config.databaseUrl ? 'PostgreSQL server: migrations applied' : `PGlite in ${config.dataDir}: migrations applied`);
   if (config.seedDemo && (await seedDemoIfEmpty(handle.db, hashPassword))) {
     log.log('Empty database: demo club seeded (invented data, demo sign-ins in README.md)');
+    justSeeded.add(handle);
   }
   return handle;
 }
@@ -42,8 +46,9 @@ export class DatabaseModule implements OnApplicationShutdown {
               useFactory: (config: ConfigService) => openConfigured(config.getOrThrow<AppConfig>('app')),
             },
         { provide: DB, inject: [DB_HANDLE], useFactory: (h: DatabaseHandle) => h.db },
+        { provide: DEMO_JUST_SEEDED, inject: [DB_HANDLE], useFactory: (h: DatabaseHandle) => justSeeded.has(h) },
       ],
-      exports: [DB, DB_HANDLE],
+      exports: [DB, DB_HANDLE, DEMO_JUST_SEEDED],
     };
   }
 

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { outbox, outcomes } from '@fuelwright/db';
-import type { CaseDto, CaseSummaryDto } from '@fuelwright/shared';
+import type { CaseDto, CaseSummaryDto, WorkOrderDto } from '@fuelwright/shared';
 import { createApp } from '../src/app.factory.js';
 import { DemoHistory } from '../src/demo/demo-history.js';
 import { MailService } from '../src/mail/mail.service.js';
@@ -53,11 +53,33 @@ describe('the demo history, on a fresh copy of the demo club', () => {
   it('has the shop’s outcome on the resolved case, and queued no mail', async () => {
     const shop = await signedIn(t, demoUser('shop'));
     const shared = (await shop.get('/api/shared-cases')).body.cases as { id: string; kartName: string }[];
-    expect(shared.map((c) => c.kartName)).toEqual(['Blue 27']);
-    const logged = (await shop.get(`/api/cases/${shared[0].id}/outcomes`)).body.outcomes;
+    expect(shared.map((c) => c.kartName).sort()).toEqual(['Blue 27', 'Yellow 8']);
+    const logged = (await shop.get(`/api/cases/${shared.find((c) => c.kartName === 'Blue 27')!.id}/outcomes`)).body.outcomes;
     expect(logged).toEqual([expect.objectContaining({ confirmedCauses: ['foam-degraded'], loggedByName: 'Gearpit Workshop (invented)' })]);
     expect(await t.db.db.select().from(outbox)).toEqual([]);
     expect(await flushMail(t)).toEqual([]);
+  });
+
+  it('gives the shop two work orders: the second racer’s shared kart open, a walk-in done with its outcome', async () => {
+    const shop = await signedIn(t, demoUser('shop'));
+    const orders: WorkOrderDto[] = (await shop.get('/api/work-orders')).body.workOrders;
+    expect(orders.map((w) => [w.customerName, w.kartDescription, w.status, w.outcomes]).sort()).toEqual([
+      ['Oskar Brannick', 'Yellow 8', 'open', 0],
+      ['Walk-in customer (invented)', '100 cc direct-drive, float-valve', 'done', 1],
+    ]);
+    const open = orders.find((w) => w.status === 'open')!;
+    const racer2Cases: CaseSummaryDto[] = (await (await signedIn(t, demoUser('racer2'))).get('/api/cases')).body.cases;
+    expect(racer2Cases.map((c) => [c.id, c.kartName, c.state])).toEqual([[open.caseId, 'Yellow 8', 'open']]);
+    expect(open.symptoms.map((s) => s.id)).toEqual(['fades-after-laps', 'cuts-out-in-corners']);
+    expect(open.notes).toMatch(/float valve/);
+    const done = orders.find((w) => w.status === 'done')!;
+    expect(done.caseId).toBeNull();
+    expect(done.symptoms.map((s) => s.id)).toEqual(['slow-deceleration', 'high-idle']);
+    expect(done.setup).toEqual({ carburettorKind: 'float-valve' });
+    const all = (await shop.get('/api/outcomes')).body.outcomes as { workOrderId: string | null; confirmedCauses: string[]; fix: string; labourMinutes: number | null }[];
+    expect(all.filter((o) => o.workOrderId === done.id)).toEqual([
+      expect.objectContaining({ confirmedCauses: ['idle-screw-set'], fix: expect.stringMatching(/^Idle screw found set in two turns, backed off/), labourMinutes: 15 }),
+    ]);
   });
 
   it('writes nothing the second time', async () => {
@@ -65,7 +87,8 @@ describe('the demo history, on a fresh copy of the demo club', () => {
     const racer = await signedIn(t, demoUser('racer'));
     expect((await racer.get('/api/cases')).body.cases).toHaveLength(2);
     expect((await (await signedIn(t, demoUser('coach'))).get('/api/shared-cases')).body.cases).toHaveLength(1);
-    expect(await t.db.db.select().from(outcomes)).toHaveLength(1);
+    expect(await t.db.db.select().from(outcomes)).toHaveLength(2);
+    expect((await (await signedIn(t, demoUser('shop'))).get('/api/work-orders')).body.workOrders).toHaveLength(2);
   });
 });
 

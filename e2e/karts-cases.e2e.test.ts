@@ -147,6 +147,8 @@ describe('karts, setups and cases in the browser', () => {
 
     // Case list: filter by kart, then by state.
     await page.goto(`${baseUrl}/cases`);
+    // On a phone the filters fold behind a button while none is set.
+    await page.getByRole('button', { name: 'Filters', exact: true }).click();
     await page.getByLabel('Kart').selectOption(kartId);
     const caseCards = page.getByRole('list', { name: 'Your cases' });
     await expect.poll(() => caseCards.getByRole('listitem').count(), POLL).toBe(2);

@@ -243,7 +243,11 @@ export function CasePage({
             viewer?.role === 'coach' || viewer?.role === 'shop' ? (
               <LinkButton className="fw-touch" size="large" to={paths.sharedCases} text="Back to shared cases" />
             ) : (
-              <LinkButton className="fw-touch" size="large" to={paths.cases} text="Back to cases" />
+              // Any account may have cases shared with it, and lose access to one: offer both lists.
+              <div className="fw-not-found-actions">
+                <LinkButton className="fw-touch" size="large" to={paths.cases} text="Back to cases" />
+                <LinkButton className="fw-touch" size="large" variant="minimal" to={paths.sharedCases} text="Back to shared cases" />
+              </div>
             )
           ) : (
             <Button size="large" text="Try again" onClick={() => void query.refetch()} />

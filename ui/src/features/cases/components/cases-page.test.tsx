@@ -135,6 +135,47 @@ describe('case list', () => {
     const links = within(cards).getAllByRole('link').map((a) => a.getAttribute('href'));
     expect(links).toEqual(['/cases/c-abandoned', '/cases/c-open']);
   });
+
+  it('folds the filters behind a button on a phone, counting the ones set, with the sort in view', async () => {
+    setPhoneWidth(true);
+    api();
+    const user = userEvent.setup();
+    const { router } = renderApp('/cases');
+    await screen.findByRole('list', { name: 'Your cases' });
+    // No filter set: closed, the sort control still there.
+    const toggle = screen.getByRole('button', { name: 'Filters' });
+    expect(toggle).toHaveAttribute('aria-expanded', 'false');
+    expect(screen.queryByLabelText('State')).toBeNull();
+    expect(screen.getByLabelText('Sort by')).toBeInTheDocument();
+
+    await user.click(toggle);
+    expect(toggle).toHaveAttribute('aria-expanded', 'true');
+    await user.selectOptions(screen.getByLabelText('State'), 'open');
+    await waitFor(() => expect(router.state.location.search).toBe('?state=open'));
+    expect(await screen.findByRole('button', { name: 'Filters · 1' })).toHaveAttribute('aria-expanded', 'true');
+
+    await user.click(screen.getByRole('button', { name: 'Filters · 1' }));
+    expect(screen.queryByLabelText('State')).toBeNull();
+    expect(screen.getByLabelText('Sort by')).toBeInTheDocument();
+  });
+
+  it('opens the filters on a phone when the address already sets some', async () => {
+    setPhoneWidth(true);
+    api();
+    renderApp('/cases?state=open&cause=foam-degraded');
+    const toggle = await screen.findByRole('button', { name: 'Filters · 2' });
+    expect(toggle).toHaveAttribute('aria-expanded', 'true');
+    expect((screen.getByLabelText('State') as HTMLSelectElement).value).toBe('open');
+  });
+
+  it('shows the filters without a button on a wide screen', async () => {
+    setPhoneWidth(false);
+    api();
+    renderApp('/cases');
+    await screen.findByRole('table', { name: 'Your cases' });
+    expect(screen.getByLabelText('State')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /^Filters/ })).toBeNull();
+  });
 });
 
 describe('case page', () => {
@@ -217,5 +258,7 @@ describe('case page', () => {
     renderApp('/cases/nope');
     expect(await screen.findByText('Case not found')).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Back to cases' })).toHaveAttribute('href', '/cases');
+    // A racer may have had the case shared with it and lost access: the shared list is offered too.
+    expect(screen.getByRole('button', { name: 'Back to shared cases' })).toHaveAttribute('href', '/shared-cases');
   });
 });

@@ -1,6 +1,6 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { Button, Card, FormGroup, HTMLSelect, HTMLTable, NonIdealState, Spinner } from '@blueprintjs/core';
-import { ArrowDownIcon, ArrowUpIcon, DiagnosisIcon, ErrorIcon, FolderOpenIcon, SwapVerticalIcon } from '@blueprintjs/icons';
+import { ArrowDownIcon, ArrowUpIcon, ChevronDownIcon, ChevronUpIcon, DiagnosisIcon, ErrorIcon, FilterIcon, FolderOpenIcon, SwapVerticalIcon } from '@blueprintjs/icons';
 import { generatePath, Link, useNavigation, useSearchParams } from 'react-router-dom';
 import { CASE_STATES, CASE_STATE_LABELS, type CaseSummaryDto } from '@fuelwright/shared';
 import { paths } from '../../../app/paths';
@@ -153,7 +153,9 @@ function describeFilters(parts: { state?: string; kart?: string; cause?: string;
 /**
  * The racer's cases: filter by state and kart (on the server), by top cause and opening period (in
  * the page), sort by any column (a card list on a phone). Every filter and the order live in the
- * address, so a reload or a shared link keeps them.
+ * address, so a reload or a shared link keeps them. On a phone the filters fold behind a "Filters"
+ * button (closed unless a filter is set when the page opens) so the first case shows without
+ * scrolling; the sort control stays in view.
  */
 export function CasesPage() {
   const [params, setParams] = useSearchParams();
@@ -192,7 +194,11 @@ export function CasesPage() {
 
   const loaded = cases.data ?? [];
   const list = sortCases(filterCases(loaded, listFilter), sort, labels);
-  const filtered = Boolean(state || kartId || listFilter.cause || listFilter.from || listFilter.to);
+  const activeFilters = [state, kartId, listFilter.cause, listFilter.from, listFilter.to].filter(Boolean).length;
+  const filtered = activeFilters > 0;
+  // Only read on a phone; decided once, so clearing the filters does not snap the panel shut.
+  const [filtersOpen, setFiltersOpen] = useState(filtered);
+  const showFilters = !phone || filtersOpen;
   const causeOptions = [{ value: '', label: 'All top causes' }, ...topCauseOptions(loaded, labels, listFilter.cause)];
   const clearAll = () => update({ state: undefined, kartId: undefined, cause: undefined, from: undefined, to: undefined });
   const kartOptions = [
@@ -201,6 +207,31 @@ export function CasesPage() {
   ];
   // A kart in the address that is not (or no longer) in the list still shows as chosen.
   if (kartId && karts.isSuccess && !kartOptions.some((o) => o.value === kartId)) kartOptions.push({ value: kartId, label: 'Unknown kart' });
+
+  const sortControl = (
+    <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
+      <div className="fw-sort-row">
+        <HTMLSelect
+          id="cases-sort"
+          large
+          fill
+          value={sort.key}
+          onChange={(event) => {
+            const key = event.currentTarget.value as CaseSortKey;
+            update({ sort: key, dir: firstDirection(key) });
+          }}
+          options={CASE_SORT_KEYS.map((key) => ({ value: key, label: CASE_SORT_LABELS[key] }))}
+        />
+        <Button
+          className="fw-touch"
+          size="large"
+          icon={sort.dir === 'asc' ? <ArrowUpIcon /> : <ArrowDownIcon />}
+          aria-label={sort.dir === 'asc' ? 'Ascending: press for descending' : 'Descending: press for ascending'}
+          onClick={() => update({ dir: sort.dir === 'asc' ? 'desc' : 'asc' })}
+        />
+      </div>
+    </Filter>
+  );
 
   return (
     <Page
@@ -214,65 +245,58 @@ export function CasesPage() {
     >
       {(filtered || cases.isPending || loaded.length > 0) && (
         <div className="fw-filters" role="search" aria-label="Filter cases">
-          <Filter id="cases-state" label="State">
-            <HTMLSelect
-              id="cases-state"
-              large
-              fill
-              value={state ?? ''}
-              onChange={(event) => update({ state: event.currentTarget.value || undefined })}
-              options={[{ value: '', label: 'All states' }, ...CASE_STATES.map((s) => ({ value: s, label: CASE_STATE_LABELS[s] }))]}
-            />
-          </Filter>
-          <Filter id="cases-kart" label="Kart">
-            <HTMLSelect
-              id="cases-kart"
-              large
-              fill
-              value={kartId ?? ''}
-              onChange={(event) => update({ kartId: event.currentTarget.value || undefined })}
-              options={kartOptions}
-            />
-          </Filter>
-          <Filter id="cases-cause" label="Top cause" className="fw-filter-cause">
-            <HTMLSelect
-              id="cases-cause"
-              large
-              fill
-              value={listFilter.cause ?? ''}
-              onChange={(event) => update({ cause: event.currentTarget.value || undefined })}
-              options={causeOptions}
-            />
-          </Filter>
-          <div className="fw-filter-period">
-            <PeriodFilter value={{ from: period.from, to: period.to }} onChange={(next) => update({ from: next.from, to: next.to })} idPrefix="cases-opened" clearable={false} />
-          </div>
           {phone && (
-            <Filter id="cases-sort" label="Sort by" className="fw-filter-sort">
-              <div className="fw-sort-row">
+            <Button
+              className="fw-touch fw-filters-toggle"
+              size="large"
+              icon={<FilterIcon />}
+              endIcon={filtersOpen ? <ChevronUpIcon /> : <ChevronDownIcon />}
+              text={activeFilters > 0 ? `Filters · ${activeFilters}` : 'Filters'}
+              aria-expanded={filtersOpen}
+              aria-controls="cases-filter-fields"
+              onClick={() => setFiltersOpen((open) => !open)}
+            />
+          )}
+          {phone && sortControl}
+          {showFilters && (
+            <div className="fw-filter-fields" id="cases-filter-fields">
+              <Filter id="cases-state" label="State">
                 <HTMLSelect
-                  id="cases-sort"
+                  id="cases-state"
                   large
                   fill
-                  value={sort.key}
-                  onChange={(event) => {
-                    const key = event.currentTarget.value as CaseSortKey;
-                    update({ sort: key, dir: firstDirection(key) });
-                  }}
-                  options={CASE_SORT_KEYS.map((key) => ({ value: key, label: CASE_SORT_LABELS[key] }))}
+                  value={state ?? ''}
+                  onChange={(event) => update({ state: event.currentTarget.value || undefined })}
+                  options={[{ value: '', label: 'All states' }, ...CASE_STATES.map((s) => ({ value: s, label: CASE_STATE_LABELS[s] }))]}
                 />
-                <Button
-                  className="fw-touch"
-                  size="large"
-                  icon={sort.dir === 'asc' ? <ArrowUpIcon /> : <ArrowDownIcon />}
-                  aria-label={sort.dir === 'asc' ? 'Ascending: press for descending' : 'Descending: press for ascending'}
-                  onClick={() => update({ dir: sort.dir === 'asc' ? 'desc' : 'asc' })}
+              </Filter>
+              <Filter id="cases-kart" label="Kart">
+                <HTMLSelect
+                  id="cases-kart"
+                  large
+                  fill
+                  value={kartId ?? ''}
+                  onChange={(event) => update({ kartId: event.currentTarget.value || undefined })}
+                  options={kartOptions}
                 />
+              </Filter>
+              <Filter id="cases-cause" label="Top cause" className="fw-filter-cause">
+                <HTMLSelect
+                  id="cases-cause"
+                  large
+                  fill
+                  value={listFilter.cause ?? ''}
+                  onChange={(event) => update({ cause: event.currentTarget.value || undefined })}
+                  options={causeOptions}
+                />
+              </Filter>
+              <div className="fw-filter-period">
+                <PeriodFilter value={{ from: period.from, to: period.to }} onChange={(next) => update({ from: next.from, to: next.to })} idPrefix="cases-opened" clearable={false} />
               </div>
-            </Filter>
-          )}
-          {filtered && (
-            <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Clear filters" onClick={clearAll} />
+              {filtered && (
+                <Button className="fw-touch fw-filter-clear" size="large" variant="minimal" text="Clear filters" onClick={clearAll} />
+              )}
+            </div>
           )}
         </div>
       )}

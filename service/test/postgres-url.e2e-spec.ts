@@ -1,15 +1,11 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { PGlite } from '@electric-sql/pglite';
 import { PGLiteSocketServer } from '@electric-sql/pglite-socket';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { openDatabase, seedDemoIfEmpty } from '@fuelwright/db';
-import { createApp } from '../src/app.factory.js';
 import { hashPassword } from '../src/auth/password.js';
-import { demoUser } from './test-app.js';
+import { demoUser, startTestApp, type TestApp } from './test-app.js';
 
 // The whole app on the DATABASE_URL path: drizzle's node-postgres driver talking the PostgreSQL
 // wire protocol to an in-memory PGlite served on loopback by @electric-sql/pglite-socket (no
@@ -17,8 +13,8 @@ import { demoUser } from './test-app.js';
 describe('the app on a PostgreSQL server (node-postgres driver)', () => {
   let engine: PGlite;
   let server: PGLiteSocketServer;
+  let t: TestApp;
   let app: NestExpressApplication;
-  let objectsDir: string;
 
   beforeAll(async () => {
     engine = await PGlite.create();
@@ -28,30 +24,14 @@ describe('the app on a PostgreSQL server (node-postgres driver)', () => {
     expect(handle.kind).toBe('postgres');
     await handle.migrate();
     expect(await seedDemoIfEmpty(handle.db, hashPassword)).toBe(true);
-    objectsDir = mkdtempSync(join(tmpdir(), 'fw-objects-'));
-    app = await createApp({
-      logger: false,
-      database: handle,
-      config: {
-        sessionSecret: 'test-secret-that-is-long-enough-0123456789',
-        uiDist: '/nonexistent',
-        seedDemo: false,
-        mailPollMs: 0,
-        mailCapturePort: 0,
-        smtpUrl: undefined,
-        publicUrl: 'http://fuelwright.test',
-        s3Endpoint: undefined,
-        objectsDir,
-      },
-    });
-    await app.init();
+    t = await startTestApp(handle);
+    app = t.app;
   }, 120_000);
 
   afterAll(async () => {
-    await app?.close();
+    await t?.close();
     await server?.stop();
     await engine?.close();
-    if (objectsDir) rmSync(objectsDir, { recursive: true, force: true });
   });
 
   it('signs a demo account in, and the session row is written on the server', async () => {

@@ -25,7 +25,11 @@ export async function cloneTemplateDatabase(): Promise<DatabaseHandle> {
 }
 
 export async function createTestApp(config: Partial<AppConfig> = {}): Promise<TestApp> {
-  const db = await cloneTemplateDatabase();
+  return startTestApp(await cloneTemplateDatabase(), config);
+}
+
+/** The app on a given database, with the test configuration (no timers, a local mail capture, a temporary object store). */
+export async function startTestApp(db: DatabaseHandle, config: Partial<AppConfig> = {}): Promise<TestApp> {
   const objectsDir = mkdtempSync(join(tmpdir(), 'fw-objects-'));
   const app = await createApp({
     logger: false,

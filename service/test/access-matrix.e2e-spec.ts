@@ -3,7 +3,7 @@ import request from 'supertest';
 import { eq } from 'drizzle-orm';
 import { caseEvents, cases, karts, setups } from '@fuelwright/db';
 import type { CaseDto } from '@fuelwright/shared';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, flushMail, linkToken, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 /**
  * The access policy (common/access/access-policy.ts) as a table over HTTP: who may do what with a
@@ -105,10 +105,7 @@ describe('access matrix: actor x action on a racer’s kart and case', () => {
     kartId = (await as.owner.post('/api/karts').send({ name: 'Matrix', displacementCc: 100, drive: 'direct-drive', carburettorKind: 'pump-around' })).body.id;
     expect((await as.owner.post(`/api/karts/${kartId}/setups`).send({ takenOn: '2026-10-01', mainJet: 118 })).status).toBe(201);
     shared = await openCase();
-    const before = (await flushMail(t)).length;
-    expect((await as.owner.post('/api/shares').send({ scope: 'kart', kartId, email: 'coach@fuelwright.test', as: 'coach' })).status).toBe(201);
-    const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    expect((await as.sharedCoach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+    await shareAndAccept(t, as.owner, as.sharedCoach, 'coach@fuelwright.test', { scope: 'kart', kartId });
     // Someone with no account, invited to the same kart, signs up through the link: a racer account.
     const before2 = (await flushMail(t)).length;
     expect((await as.owner.post('/api/shares').send({ scope: 'kart', kartId, email: 'helper@example.test', as: 'coach' })).status).toBe(201);

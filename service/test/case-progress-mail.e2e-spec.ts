@@ -9,7 +9,7 @@ import type { CaseDto } from '@fuelwright/shared';
 import { PROGRESS_HOLD_MS } from '../src/cases/case-progress-notices.js';
 import { MailService } from '../src/mail/mail.service.js';
 import type { CapturedMail } from '../src/mail/mail-capture.server.js';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, flushMail, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -36,10 +36,7 @@ describe('progress on a shared case, by e-mail', () => {
     racer = await signedIn(t, demoUser('racer'));
     coach = await signedIn(t, demoUser('coach'));
     kartId = (await racer.get('/api/karts')).body.karts[0].id;
-    const before = await sentCount();
-    expect((await racer.post('/api/shares').send({ scope: 'kart', kartId, email: COACH, as: 'coach' })).status).toBe(201);
-    const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes(COACH))!;
-    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+    await shareAndAccept(t, racer, coach, COACH, { scope: 'kart', kartId });
   });
   afterAll(() => t.close());
 

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { and, eq } from 'drizzle-orm';
 import { authTokens } from '@fuelwright/db';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, flushMail, linkToken, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -66,9 +66,7 @@ describe('the shared-cases dashboard: open first, newest change first', () => {
     const b = (await racer.post('/api/cases').send({ kartId, symptoms: ['sporadic-running'] })).body;
     const closed = (await racer.post('/api/cases').send({ kartId, symptoms: ['hesitation'] })).body;
     expect((await racer.post(`/api/cases/${closed.id}/resolve`).send({ causeId: 'vent-lines-off', fix: 'Refitted the vent lines' })).status).toBe(200);
-    await racer.post('/api/shares').send({ scope: 'kart', kartId, email: 'coach@fuelwright.test', as: 'coach' });
-    const invite = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+    await shareAndAccept(t, racer, coach, 'coach@fuelwright.test', { scope: 'kart', kartId });
     const ours = [a.id, b.id, closed.id];
     const order = async () => ((await coach.get('/api/shared-cases')).body.cases as { id: string }[]).map((x) => x.id).filter((id) => ours.includes(id));
 

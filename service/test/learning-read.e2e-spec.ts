@@ -6,7 +6,7 @@ import { eq } from 'drizzle-orm';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
 import { ProposalRunner } from '../src/learning/proposal-runner.js';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -60,9 +60,7 @@ describe('reading back outcomes, proposals and work orders', () => {
     });
 
     it('lets a shop the case is shared with read them and add its own; the racer then sees the shop’s entry by name', async () => {
-      await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'shop@fuelwright.test', as: 'shop' });
-      const mail = (await flushMail(t)).find((m) => m.to.includes('shop@fuelwright.test'))!;
-      expect((await shop.post('/api/invitations/accept').send({ token: linkToken(mail, '/invitations/') })).status).toBeLessThan(300);
+      await shareAndAccept(t, racer, shop, 'shop@fuelwright.test', { scope: 'case', caseId: c.id }, 'shop');
       const seen = await shop.get(`/api/cases/${c.id}/outcomes`);
       expect(seen.status).toBe(200);
       // The racer's entries, which are not the shop's own.

@@ -5,7 +5,7 @@ import type { CaseDto, ProposalDto } from '@fuelwright/shared';
 import { generateOutcomes } from '../../fixtures/generate-outcomes.js';
 import { insertOutcomeRecords } from '../src/learning/demo-outcomes.js';
 import { ProposalRunner } from '../src/learning/proposal-runner.js';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -65,9 +65,7 @@ describe('outcomes, insights and ruleset versions', () => {
   });
 
   it('lets a shop log on a shared case and on a walk-in work order', async () => {
-    await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'shop@fuelwright.test', as: 'shop' });
-    const mail = (await flushMail(t)).find((m) => m.to.includes('shop@fuelwright.test'))!;
-    await shop.post('/api/invitations/accept').send({ token: linkToken(mail, '/invitations/') });
+    await shareAndAccept(t, racer, shop, 'shop@fuelwright.test', { scope: 'case', caseId: c.id }, 'shop');
     const onCase = await shop.post('/api/outcomes').send({ caseId: c.id, confirmedCauses: ['foam-degraded'], fix: 'Foam replaced', parts: 'foam set', labourMinutes: 20, stillFixed: true });
     expect(onCase.status).toBe(201);
     const wo = await shop.post('/api/work-orders').send({ customerName: 'Walk-in customer', kartDescription: '125 shifter', symptoms: ['fuel-from-vents'], setup: { carburettorKind: 'pump-around', ventLinesFitted: false } });

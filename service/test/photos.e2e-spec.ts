@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { photos } from '@fuelwright/db';
 import type { CaseDto } from '@fuelwright/shared';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, flushMail, linkToken, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -80,9 +80,7 @@ describe('photos of a case', () => {
     expect((await coach.get(list[0].url)).status).toBe(404);
     expect((await t.http.get(list[0].url)).status).toBe(401);
     // Once shared, the coach sees it and may answer with a photo too.
-    await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'coach@fuelwright.test', as: 'coach' });
-    const mail = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    await coach.post('/api/invitations/accept').send({ token: linkToken(mail, '/invitations/') });
+    await shareAndAccept(t, racer, coach, 'coach@fuelwright.test', { scope: 'case', caseId: c.id });
     expect((await coach.get(list[0].url)).status).toBe(200);
   });
 
@@ -104,12 +102,7 @@ describe('e-mail about a new photo', () => {
   let c: CaseDto;
   let other: CaseDto;
   const png = () => sharp({ create: { width: 40, height: 40, channels: 3, background: '#606060' } }).png().toBuffer();
-  const share = async (caseId: string) => {
-    const before = (await flushMail(t)).length;
-    await racer.post('/api/shares').send({ scope: 'case', caseId, email: 'coach@fuelwright.test', as: 'coach' });
-    const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
-  };
+  const share = (caseId: string) => shareAndAccept(t, racer, coach, 'coach@fuelwright.test', { scope: 'case', caseId });
   beforeAll(async () => {
     t = await createTestApp();
     racer = await signedIn(t, demoUser('racer'));
@@ -180,9 +173,7 @@ describe('a coach’s photo and the per-case limit', () => {
     coach = await signedIn(t, demoUser('coach'));
     const kartId = (await racer.get('/api/karts')).body.karts[0].id;
     c = (await racer.post('/api/cases').send({ kartId, symptoms: ['bog-on-acceleration'] })).body;
-    await racer.post('/api/shares').send({ scope: 'case', caseId: c.id, email: 'coach@fuelwright.test', as: 'coach' });
-    const invite = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    expect((await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') })).status).toBe(200);
+    await shareAndAccept(t, racer, coach, 'coach@fuelwright.test', { scope: 'case', caseId: c.id });
   });
   afterAll(() => t.close());
 

@@ -4,7 +4,7 @@ import { eq } from 'drizzle-orm';
 import { outbox } from '@fuelwright/db';
 import type { CaseDto } from '@fuelwright/shared';
 import { MailService } from '../src/mail/mail.service.js';
-import { createTestApp, demoUser, flushMail, linkToken, signedIn, type TestApp } from './test-app.js';
+import { createTestApp, demoUser, flushMail, linkToken, shareAndAccept, signedIn, type TestApp } from './test-app.js';
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -209,9 +209,7 @@ describe('e-mail delivery, settings and account links', () => {
     const coach = await signedIn(t, demoUser('coach'));
     const kartId = (await racer.get('/api/karts')).body.karts[0].id;
     const c = (await racer.post('/api/cases').send({ kartId, symptoms: ['hesitation'] })).body;
-    await racer.post('/api/shares').send({ scope: 'kart', kartId, email: 'coach@fuelwright.test', as: 'coach' });
-    const invite = (await flushMail(t)).find((m) => m.to.includes('coach@fuelwright.test'))!;
-    await coach.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') });
+    await shareAndAccept(t, racer, coach, 'coach@fuelwright.test', { scope: 'kart', kartId });
     const mail = t.app.get(MailService);
     mail.capture!.failNext = 1;
     expect((await coach.post(`/api/cases/${c.id}/comments`).send({ body: 'Check the vent lines' })).status).toBe(201);

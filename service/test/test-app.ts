@@ -88,3 +88,25 @@ export function linkToken(m: CapturedMail, path: string): string {
   if (!hit) throw new Error(`no ${path} link in: ${m.text}`);
   return hit[1];
 }
+
+/**
+ * The owner shares a kart or a case by e-mail with a signed-in account, which accepts the e-mailed
+ * invitation. Returns what the accept answered (the shared case or kart).
+ */
+export async function shareAndAccept(
+  t: TestApp,
+  owner: ReturnType<typeof request.agent>,
+  grantee: ReturnType<typeof request.agent>,
+  email: string,
+  target: { scope: 'kart'; kartId: string } | { scope: 'case'; caseId: string },
+  as: 'coach' | 'shop' = 'coach',
+): Promise<{ caseId: string | null; kartId: string }> {
+  const before = (await flushMail(t)).length;
+  const shared = await owner.post('/api/shares').send({ ...target, email, as });
+  if (shared.status !== 201) throw new Error(`sharing with ${email} failed: ${shared.status} ${JSON.stringify(shared.body)}`);
+  const invite = (await flushMail(t)).slice(before).find((m) => m.to.includes(email));
+  if (!invite) throw new Error(`no invitation e-mail reached ${email}`);
+  const accepted = await grantee.post('/api/invitations/accept').send({ token: linkToken(invite, '/invitations/') });
+  if (accepted.status !== 200) throw new Error(`accepting as ${email} failed: ${accepted.status} ${JSON.stringify(accepted.body)}`);
+  return accepted.body;
+}

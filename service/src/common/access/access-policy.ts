@@ -63,17 +63,7 @@ export class AccessPolicy {
 
   /** Users with an active share of this case, directly or through its kart. */
   async granteesOfCase(caseId: string, kartId: string): Promise<string[]> {
-    const rows = await this.db
-      .select({ id: shares.granteeId })
-      .from(shares)
-      .where(
-        and(
-          isNull(shares.revokedAt),
-          isNotNull(shares.granteeId),
-          or(and(eq(shares.scope, 'kart'), eq(shares.kartId, kartId)), and(eq(shares.scope, 'case'), eq(shares.caseId, caseId))),
-        ),
-      );
-    return rows.map((r) => r.id!);
+    return [...(await this.shareLabelsOfCase(caseId, kartId)).keys()];
   }
 
   /** What each grantee is to the owner on this case (the share's "as": coach or shop); a kart share counts for its cases. */
